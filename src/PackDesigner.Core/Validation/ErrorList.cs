@@ -12,7 +12,12 @@ internal sealed class ErrorList : List<ValidationError>
     {
         if (!double.IsFinite(value))
         {
-            Add(field, "Must be a finite number.");
+            // A figure already reported (for example missing for a custom chemistry) gets no second message.
+            if (!this.Any(e => e.Field == field))
+            {
+                Add(field, "Must be a finite number.");
+            }
+
             return false;
         }
 

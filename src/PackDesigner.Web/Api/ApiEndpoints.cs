@@ -1,0 +1,38 @@
+using Microsoft.AspNetCore.Http.Json;
+using Microsoft.Extensions.Options;
+using PackDesigner.Core.Cells;
+using PackDesigner.Core.Evaluation;
+
+namespace PackDesigner.Web.Api;
+
+/// <summary>The JSON API, version 1.</summary>
+public static class ApiEndpoints
+{
+    public const string Prefix = "/api";
+    public const string Evaluate = "/api/v1/evaluate";
+    public const string Presets = "/api/v1/presets";
+
+    public static bool IsApiRequest(HttpContext context) => context.Request.Path.StartsWithSegments(Prefix);
+
+    public static IEndpointRouteBuilder MapPackDesignerApi(this IEndpointRouteBuilder app)
+    {
+        app.MapPost(Evaluate, EvaluateAsync)
+            .Produces<EvaluationResult>()
+            .ProducesValidationProblem()
+            .DisableAntiforgery();
+        app.MapGet(Presets, () => TypedResults.Ok(PresetsResponse.From(ChemistryPresets.All)));
+        return app;
+    }
+
+    private static async Task<IResult> EvaluateAsync(HttpRequest request, IOptions<JsonOptions> json, CancellationToken ct)
+    {
+        var body = await JsonBody.ReadAsync<EvaluateRequest>(request, json.Value.SerializerOptions, ct);
+        if (body.Value is not { } design)
+        {
+            return body.Problem!;
+        }
+
+        var outcome = DesignRequestMapper.Evaluate(design);
+        return outcome.Result is { } result ? TypedResults.Ok(result) : ApiProblems.Invalid(outcome.Errors);
+    }
+}

@@ -1,0 +1,27 @@
+using Microsoft.AspNetCore.Mvc.ModelBinding;
+
+namespace PackDesigner.Web.Pages.Designs;
+
+/// <summary>One line of the error summary at the top of the form, linking to its field.</summary>
+public sealed record SummaryError(string Label, string? Anchor, string Message)
+{
+    /// <summary>Errors not tied to a field first, then in the order the fields appear on the form.</summary>
+    public static IReadOnlyList<SummaryError> From(ModelStateDictionary state)
+    {
+        var list = new List<SummaryError>();
+        if (state.TryGetValue(string.Empty, out var general))
+        {
+            list.AddRange(general.Errors.Select(e => new SummaryError("Design", null, e.ErrorMessage)));
+        }
+
+        foreach (var field in FormFieldPaths.All)
+        {
+            if (state.TryGetValue(field.FormKey, out var entry))
+            {
+                list.AddRange(entry.Errors.Select(e => new SummaryError($"{field.Section}: {field.Label}", ResultSheet.IdOf(field.FormKey), e.ErrorMessage)));
+            }
+        }
+
+        return list;
+    }
+}

@@ -74,6 +74,22 @@ public sealed class ChargeSetpointCalculatorTests
     }
 
     [Fact]
+    public void Compute_BottomBalancedWindowTopBinding_WiderToleranceRaisesCv()
+    {
+        // Documented behaviour, not a safety property: the window top binds on the typical group, and a smaller
+        // weakest group sits higher on the curve at the same typical SOC, so the CV for "typical at 90 %",
+        // S·a + S·η + drop + b·0.9·(S − 1 + r), grows with r. The OV release still caps the weakest group.
+        var narrow = Compute(LinearDesign().WithTolerance(1));
+        var wide = Compute(LinearDesign().WithTolerance(5));
+
+        Assert.Equal(ChargeSetpointCalculator.LimitedByWindowTop, narrow.Result.ConstantVoltageLimitedBy);
+        Assert.Equal(ChargeSetpointCalculator.LimitedByWindowTop, wide.Result.ConstantVoltageLimitedBy);
+        Reference.AssertClose(B * 0.9 * (1 / 0.95 - 1 / 0.99), wide.UnroundedConstantVoltage - narrow.UnroundedConstantVoltage, 1e-9, ClosedForm);
+        Assert.True(wide.Result.WeakestCellEndOfChargeVoltage > narrow.Result.WeakestCellEndOfChargeVoltage);
+        Assert.True(wide.Result.WeakestCellEndOfChargeVoltage <= 3.65);
+    }
+
+    [Fact]
     public void Compute_TopBalanced_TypicalGroupIsHighest()
     {
         var result = Compute(LinearDesign().WithBalancing(BalancingMethod.Top));

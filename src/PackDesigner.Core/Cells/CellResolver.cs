@@ -14,6 +14,7 @@ public static class CellResolver
         var list = new ErrorList();
         var preset = ChemistryPresets.For(input.Chemistry);
         var origins = new Dictionary<string, FigureOrigin>();
+        var missing = new HashSet<string>();
 
         double Take(string name, double? value, Func<ChemistryPreset, double> fromPreset)
         {
@@ -30,8 +31,13 @@ public static class CellResolver
             }
 
             list.Add(Prefix + name, "Required for a custom chemistry (no preset to fall back on).");
+            missing.Add(name);
             return double.NaN;
         }
+
+        // A missing figure already has its error: its range check would only add a second one for the same field.
+        bool Range(string name, double value, double lo, double hi, string unit, bool exclusiveLow = false) =>
+            !missing.Contains(name) && list.Range(Prefix + name, value, lo, hi, unit, exclusiveLow);
 
         var capacity = Take("capacityAh", input.CapacityAh, p => p.CapacityAh);
         var nominal = Take("nominalVoltage", input.NominalVoltage, p => p.NominalVoltage);
@@ -49,21 +55,21 @@ public static class CellResolver
         var dischargeMin = Take("dischargeTemperatureMinC", input.DischargeTemperatureMinC, p => p.DischargeTemperatureMinC);
         var dischargeMax = Take("dischargeTemperatureMaxC", input.DischargeTemperatureMaxC, p => p.DischargeTemperatureMaxC);
 
-        var capacityOk = list.Range(Prefix + "capacityAh", capacity, 0, 10_000, "Ah", exclusiveLow: true);
-        var nominalOk = list.Range(Prefix + "nominalVoltage", nominal, 0.5, 5.5, "V");
-        var maxOk = list.Range(Prefix + "maxChargeVoltage", max, 0.5, 5.5, "V");
-        var minOk = list.Range(Prefix + "minDischargeVoltage", min, 0.5, 5.5, "V");
-        list.Range(Prefix + "maxChargeCurrentA", maxCharge, 0, 10_000, "A", exclusiveLow: true);
-        var dischargeOk = list.Range(Prefix + "maxDischargeCurrentA", maxDischarge, 0, 50_000, "A", exclusiveLow: true);
-        var peakOk = list.Range(Prefix + "peakDischargeCurrentA", peak, 0, 100_000, "A", exclusiveLow: true);
-        list.Range(Prefix + "peakDischargeDurationS", peakDuration, 0, 3600, "s", exclusiveLow: true);
-        list.Range(Prefix + "internalResistanceMilliohm", resistance, 0, 1000, "mΩ", exclusiveLow: true);
-        list.Range(Prefix + "massKg", mass, 0, 200, "kg", exclusiveLow: true);
-        list.Range(Prefix + "capacityTolerancePercent", tolerance, 0, 50, "%");
-        var chargeMinOk = list.Range(Prefix + "chargeTemperatureMinC", chargeMin, -60, 100, "°C");
-        var chargeMaxOk = list.Range(Prefix + "chargeTemperatureMaxC", chargeMax, -60, 100, "°C");
-        var dischargeMinOk = list.Range(Prefix + "dischargeTemperatureMinC", dischargeMin, -60, 100, "°C");
-        var dischargeMaxOk = list.Range(Prefix + "dischargeTemperatureMaxC", dischargeMax, -60, 100, "°C");
+        var capacityOk = Range("capacityAh", capacity, 0, 10_000, "Ah", exclusiveLow: true);
+        var nominalOk = Range("nominalVoltage", nominal, 0.5, 5.5, "V");
+        var maxOk = Range("maxChargeVoltage", max, 0.5, 5.5, "V");
+        var minOk = Range("minDischargeVoltage", min, 0.5, 5.5, "V");
+        Range("maxChargeCurrentA", maxCharge, 0, 10_000, "A", exclusiveLow: true);
+        var dischargeOk = Range("maxDischargeCurrentA", maxDischarge, 0, 50_000, "A", exclusiveLow: true);
+        var peakOk = Range("peakDischargeCurrentA", peak, 0, 100_000, "A", exclusiveLow: true);
+        Range("peakDischargeDurationS", peakDuration, 0, 3600, "s", exclusiveLow: true);
+        Range("internalResistanceMilliohm", resistance, 0, 1000, "mΩ", exclusiveLow: true);
+        Range("massKg", mass, 0, 200, "kg", exclusiveLow: true);
+        Range("capacityTolerancePercent", tolerance, 0, 50, "%");
+        var chargeMinOk = Range("chargeTemperatureMinC", chargeMin, -60, 100, "°C");
+        var chargeMaxOk = Range("chargeTemperatureMaxC", chargeMax, -60, 100, "°C");
+        var dischargeMinOk = Range("dischargeTemperatureMinC", dischargeMin, -60, 100, "°C");
+        var dischargeMaxOk = Range("dischargeTemperatureMaxC", dischargeMax, -60, 100, "°C");
 
         if (minOk && nominalOk && min >= nominal)
         {

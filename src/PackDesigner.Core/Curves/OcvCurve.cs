@@ -15,7 +15,7 @@ public sealed class OcvCurve
     private readonly double[] _volts;
     private readonly double[] _cumulativeEnergy;
 
-    private OcvCurve(double[] soc, double[] volts)
+    private OcvCurve(double[] soc, double[] volts, OcvPoint[] points)
     {
         _soc = soc;
         _volts = volts;
@@ -25,7 +25,8 @@ public sealed class OcvCurve
             _cumulativeEnergy[i] = _cumulativeEnergy[i - 1] + 0.5 * (volts[i] + volts[i - 1]) * (soc[i] - soc[i - 1]);
         }
 
-        Points = soc.Select((s, i) => new OcvPoint(s * 100.0, volts[i])).ToArray();
+        // The rows as entered: SOC/100·100 does not always give the entered percentage back (0.55·100 ≠ 55).
+        Points = points;
     }
 
     /// <summary>The table, SOC in %.</summary>
@@ -104,7 +105,7 @@ public sealed class OcvCurve
             throw new ArgumentException(errors[0].Message, nameof(points));
         }
 
-        return new OcvCurve(points.Select(p => p.SocPercent / 100.0).ToArray(), points.Select(p => p.Voltage).ToArray());
+        return new OcvCurve(points.Select(p => p.SocPercent / 100.0).ToArray(), points.Select(p => p.Voltage).ToArray(), points.ToArray());
     }
 
     /// <summary>Rest voltage at state of charge <paramref name="soc"/> (fraction, clamped to 0–1), V.</summary>

@@ -21,12 +21,14 @@ public static class EnergyCalculator
         var atRest = ctx.S * cn * curve.EnergyIntegral(ctx.SocLow, ctx.SocHigh);
         var usable = atRest * scale;
 
-        var sBottom = ctx.SocLow;
+        // In series the string stops when any group is empty: top-balanced, the weakest group empties while the
+        // others are still at TypicalSoc(0) = 1 − C_w/C_n, so they cannot go below that (bottom-balanced it is 0).
+        var model = charge.Model;
+        var sBottom = Math.Max(ctx.SocLow, model.TypicalSoc(0));
         var sTop = Math.Min(ctx.SocHigh, charge.EndOfCharge.TypicalSoc);
         double worstAtRest = 0;
         if (sTop > sBottom)
         {
-            var model = charge.Model;
             var wBottom = Math.Clamp(model.WeakestSoc(sBottom), 0, 1);
             var wTop = Math.Clamp(model.WeakestSoc(sTop), 0, 1);
             worstAtRest = (ctx.S - 1) * cn * curve.EnergyIntegral(sBottom, sTop)

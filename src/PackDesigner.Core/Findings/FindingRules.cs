@@ -246,7 +246,7 @@ public static class FindingRules
                 "charger.voltageStepV");
         }
 
-        f.AddRange(LadderBuilder.Check(ladder));
+        f.AddRange(LadderBuilder.Check(ladder, charger.VoltageStepV / ctx.S));
         return f;
     }
 }

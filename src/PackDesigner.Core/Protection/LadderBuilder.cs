@@ -67,7 +67,12 @@ public static class LadderBuilder
     };
 
     /// <summary>An error finding for every adjacent pair out of order, naming both layers.</summary>
-    public static IEnumerable<Finding> Check(IReadOnlyList<LadderLayer> ladder)
+    /// <param name="ladder">The layers, highest first.</param>
+    /// <param name="chargerStepPerCellV">
+    /// The charger's voltage step divided by S. The CV is rounded down to that step, so the charge voltage may end
+    /// up to one step per cell below the window top it was solved for without the ladder being out of order.
+    /// </param>
+    public static IEnumerable<Finding> Check(IReadOnlyList<LadderLayer> ladder, double chargerStepPerCellV = 0)
     {
         for (var i = 1; i < ladder.Count; i++)
         {
@@ -76,7 +81,8 @@ public static class LadderBuilder
             var strict = (upper.Layer == OverVoltageTrip && lower.Layer == OverVoltageRelease)
                 || (upper.Layer == UnderVoltageRelease && lower.Layer == UnderVoltageTrip);
             // 0.1 mV tolerance: values built to coincide must not trip on binary rounding.
-            var broken = strict ? lower.PerCellVoltage >= upper.PerCellVoltage : lower.PerCellVoltage > upper.PerCellVoltage + 1e-4;
+            var tolerance = upper.Layer == ChargeVoltage && lower.Layer == WindowTop ? Math.Max(1e-4, chargerStepPerCellV) : 1e-4;
+            var broken = strict ? lower.PerCellVoltage >= upper.PerCellVoltage : lower.PerCellVoltage > upper.PerCellVoltage + tolerance;
             if (broken)
             {
                 yield return new Finding(

@@ -1,3 +1,4 @@
+using PackDesigner.Core.Design;
 using PackDesigner.Core.Evaluation;
 
 namespace PackDesigner.Core.Charging;
@@ -37,7 +38,13 @@ public static class ChargeSetpointCalculator
         }
         else
         {
-            var byTop = model.ConstantVoltageForTypicalSoc(ctx.SocHigh);
+            // Bottom-balanced: the CV that ends a string of typical groups at the window's top. The smaller
+            // groups sit higher on the curve, so with them the typical group ends a little below the top, and a
+            // wider tolerance can only lower the CV (through the OV-release limit). Top-balanced: the smaller
+            // group sits lower, so the CV is solved for the typical group at the top with the string as it is.
+            var byTop = ctx.Input.Balancing == BalancingMethod.Bottom
+                ? ctx.S * (cell.OcvCurve.VoltageAt(ctx.SocHigh) + eta) + drop
+                : model.ConstantVoltageForTypicalSoc(ctx.SocHigh);
             var byRelease = model.ConstantVoltageForHighestGroup(cellThresholds.OverVoltageRelease);
             wanted = Math.Min(byTop, byRelease);
             limitedBy = byTop <= byRelease ? LimitedByWindowTop : LimitedByOverVoltageRelease;

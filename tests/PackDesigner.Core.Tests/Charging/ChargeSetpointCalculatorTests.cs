@@ -39,9 +39,10 @@ public sealed class ChargeSetpointCalculatorTests
     [Fact]
     public void Compute_BottomBalancedWindowTopBinding_MatchesClosedForm()
     {
-        // Window top 90 %: CV = S·a + S·η + drop + b·0.9·(S − 1 + r) = 28.37542 V; the OV release (3.65 V)
-        // would allow more (the weakest group is full at 95 % typical, CV = 7·(a + 0.57 + η) + 3.65 + drop = 28.6645 V).
-        var byTop = S * A + S * Eta + Drop + B * 0.9 * (S - 1 + R);
+        // Window top 90 %, bottom-balanced: the CV of a string of typical groups at the top,
+        // CV = S·(a + 0.9·b + η) + drop = 28.347 V; the OV release (3.65 V) would allow more (the weakest group
+        // is full at 95 % typical, CV = 7·(a + 0.57 + η) + 3.65 + drop = 28.6645 V).
+        var byTop = S * (A + B * 0.9 + Eta) + Drop;
 
         var result = Compute(LinearDesign());
 
@@ -74,18 +75,19 @@ public sealed class ChargeSetpointCalculatorTests
     }
 
     [Fact]
-    public void Compute_BottomBalancedWindowTopBinding_WiderToleranceRaisesCv()
+    public void Compute_BottomBalancedWindowTopBinding_WiderToleranceKeepsCvAndRaisesWeakest()
     {
-        // Documented behaviour, not a safety property: the window top binds on the typical group, and a smaller
-        // weakest group sits higher on the curve at the same typical SOC, so the CV for "typical at 90 %",
-        // S·a + S·η + drop + b·0.9·(S − 1 + r), grows with r. The OV release still caps the weakest group.
+        // The window-top limit is that of a string of typical groups, S·(a + 0.9·b + η) + drop, whatever the
+        // tolerance; a smaller weakest group then ends higher on the curve and the typical one a little lower.
         var narrow = Compute(LinearDesign().WithTolerance(1));
         var wide = Compute(LinearDesign().WithTolerance(5));
 
         Assert.Equal(ChargeSetpointCalculator.LimitedByWindowTop, narrow.Result.ConstantVoltageLimitedBy);
         Assert.Equal(ChargeSetpointCalculator.LimitedByWindowTop, wide.Result.ConstantVoltageLimitedBy);
-        Reference.AssertClose(B * 0.9 * (1 / 0.95 - 1 / 0.99), wide.UnroundedConstantVoltage - narrow.UnroundedConstantVoltage, 1e-9, ClosedForm);
+        Reference.AssertClose(narrow.UnroundedConstantVoltage, wide.UnroundedConstantVoltage, 1e-12, ClosedForm);
         Assert.True(wide.Result.WeakestCellEndOfChargeVoltage > narrow.Result.WeakestCellEndOfChargeVoltage);
+        Assert.True(wide.Result.TypicalGroupEndOfChargeSocPercent < narrow.Result.TypicalGroupEndOfChargeSocPercent);
+        Assert.True(wide.Result.TypicalGroupEndOfChargeSocPercent <= 90);
         Assert.True(wide.Result.WeakestCellEndOfChargeVoltage <= 3.65);
     }
 

@@ -157,34 +157,21 @@ public sealed class DesignPropertyTests
     }
 
     [Fact]
-    public void Evaluate_WiderCapacityToleranceWhereReleaseBinds_NeverRaisesCv()
+    public void Evaluate_WiderCapacityTolerance_NeverRaisesCv()
     {
-        // Bottom-balanced, no target: where the OV release sets the CV at both tolerances, the CV never rises
-        // as the tolerance widens. (Where the window top sets it, the CV may rise: see charge-setpoints.md.)
+        // Bottom-balanced, no target cell voltage: widening the capacity tolerance never raises the CV, whichever
+        // limit (window top, OV release or the charger) sets it.
         var gen = Gen.Select(DesignGenerators.ValidDesigns, Gen.Double[0, 10], Gen.Double[0, 10]);
-        var compared = 0;
 
         gen.Sample((input, t1, t2) =>
         {
             var (narrow, wide) = (Math.Min(t1, t2), Math.Max(t1, t2));
-            var bottom = input with
-            {
-                Balancing = BalancingMethod.Bottom,
-                SocWindow = input.SocWindow with { MaxPercent = 100 },
-                Charger = input.Charger with { TargetCellVoltage = null, MaxVoltage = 2000 },
-            };
+            var bottom = input with { Balancing = BalancingMethod.Bottom, Charger = input.Charger with { TargetCellVoltage = null } };
             var a = EvaluateValid(WithTolerance(bottom, narrow)).Charger;
             var b = EvaluateValid(WithTolerance(bottom, wide)).Charger;
 
-            if (a.ConstantVoltageLimitedBy == ChargeSetpointCalculator.LimitedByOverVoltageRelease
-                && b.ConstantVoltageLimitedBy == ChargeSetpointCalculator.LimitedByOverVoltageRelease)
-            {
-                Assert.True(b.ConstantVoltage <= a.ConstantVoltage + 1e-9, $"CV {a.ConstantVoltage} V at {narrow:0.###} % → {b.ConstantVoltage} V at {wide:0.###} %");
-                Interlocked.Increment(ref compared);
-            }
+            Assert.True(b.ConstantVoltage <= a.ConstantVoltage + 1e-9, $"CV {a.ConstantVoltage} V at {narrow:0.###} % → {b.ConstantVoltage} V at {wide:0.###} %");
         }, iter: Iterations);
-
-        Assert.True(compared >= Iterations / 4, $"Only {compared} of {Iterations} designs had the OV release setting the CV at both tolerances.");
     }
 
     [Fact]

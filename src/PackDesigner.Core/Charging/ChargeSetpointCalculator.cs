@@ -4,7 +4,7 @@ using PackDesigner.Core.Evaluation;
 namespace PackDesigner.Core.Charging;
 
 /// <summary>Charger setpoints and the end-of-charge state they lead to.</summary>
-public sealed record ChargeSetpoints(ChargerResult Result, EndOfChargeState EndOfCharge, StringChargeModel Model, double UnroundedConstantVoltage);
+public sealed record ChargeSetpoints(ChargerResult Result, EndOfChargeState EndOfCharge, StringChargeModel Model, double UnroundedConstantVoltage, double DesiredConstantVoltage);
 
 /// <summary>
 /// CV, CC and termination current. CV is the highest charger setting (rounded down to its step) that keeps
@@ -50,6 +50,7 @@ public static class ChargeSetpointCalculator
             limitedBy = byTop <= byRelease ? LimitedByWindowTop : LimitedByOverVoltageRelease;
         }
 
+        var desired = wanted;
         if (charger.MaxVoltage < wanted)
         {
             wanted = charger.MaxVoltage;
@@ -74,7 +75,7 @@ public static class ChargeSetpointCalculator
             ConstantVoltageLimitedBy: limitedBy,
             ChargeTemperatureMinC: cellThresholds.ChargeTemperatureLowTripC,
             ChargeTemperatureMaxC: cellThresholds.ChargeTemperatureHighTripC);
-        return new ChargeSetpoints(result, eoc, model, wanted);
+        return new ChargeSetpoints(result, eoc, model, wanted, desired);
     }
 
     /// <summary>Largest multiple of <paramref name="step"/> at or below <paramref name="volts"/> (a relative 1e-9 guards against binary rounding).</summary>

@@ -72,7 +72,7 @@ public static class FindingRules
         if (charge.Result.ConstantVoltageLimitedBy == ChargeSetpointCalculator.LimitedByCharger)
         {
             Add(Severity.Warning, "charger.cannot-reach-cv",
-                $"The charger's maximum {charger.MaxVoltage:0.0} V is below the wanted charge voltage; charging ends with the typical group at {charge.Result.TypicalGroupEndOfChargeSocPercent:0.0} % instead of the window's top.",
+                $"The charger's maximum {charger.MaxVoltage:0.0} V is below the wanted charge voltage {charge.DesiredConstantVoltage:0.0} V; charging ends with the typical group at {charge.Result.TypicalGroupEndOfChargeSocPercent:0.0} % state of charge.",
                 "charger.maxVoltage");
         }
 
@@ -212,7 +212,9 @@ public static class FindingRules
         if (v.VoltageClass != VoltageClass.A)
         {
             Add(Severity.Warning, "voltage.class-b",
-                $"The pack maximum {v.Max:0.0} V DC is above 60 V DC (ISO 6469-3 class B): hazardous-voltage practice applies (isolation, touch protection, marking, interlocks, trained people).",
+                v.VoltageClass == VoltageClass.B
+                    ? (FormattableString)$"The pack maximum {v.Max:0.0} V DC is above 60 V DC (ISO 6469-3 class B): hazardous-voltage practice applies (isolation, touch protection, marking, interlocks, trained people)."
+                    : $"The pack maximum {v.Max:0.0} V DC is above 1500 V DC, beyond ISO 6469-3 class B: hazardous-voltage practice applies and the equipment must be rated for it.",
                 "series");
         }
 

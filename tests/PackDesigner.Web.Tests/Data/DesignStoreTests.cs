@@ -266,6 +266,29 @@ public abstract class DesignStoreTests<TDatabase>(TDatabase database) : IClassFi
     }
 
     [ProviderFact]
+    public async Task ListDesigns_ManyRows_TakesTwoQueriesWhateverTheRowCount()
+    {
+        var token = "nq" + Guid.NewGuid().ToString("N")[..8];
+        await using (var setup = Database.CreateContext())
+        {
+            var customer = (await Database.Customers(setup).CreateAsync(new CustomerData("N+1 customer " + token))).Value!;
+            for (var i = 0; i < 12; i++)
+            {
+                await Database.Designs(setup).CreateDesignAsync($"{token} {i}", customer.Id, null, null, TestDesigns.Valid(), "a");
+            }
+        }
+
+        var counter = new CommandCounter();
+        await using var db = Database.CreateContext(counter);
+        var page = await Database.Designs(db).ListDesignsAsync(token, DesignSort.NameAscending, 1, 10);
+
+        Assert.Equal(10, page.Items.Count);
+        Assert.All(page.Items, r => Assert.Equal("N+1 customer " + token, r.CustomerName));
+        // One COUNT and one page query: the customer, cell, latest revision and status come in by joins and subqueries.
+        Assert.Equal(2, counter.Count);
+    }
+
+    [ProviderFact]
     public async Task SavedRevision_ChangedOrDeletedThroughDbContext_IsRefused()
     {
         await using var db = Database.CreateContext();

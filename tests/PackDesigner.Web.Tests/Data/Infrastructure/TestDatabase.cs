@@ -1,5 +1,6 @@
 using Microsoft.Data.Sqlite;
 using Microsoft.EntityFrameworkCore;
+using Microsoft.EntityFrameworkCore.Diagnostics;
 using Npgsql;
 using PackDesigner.Data;
 using PackDesigner.Data.Cells;
@@ -24,7 +25,11 @@ public abstract class TestDatabase : IAsyncLifetime
 
     /// <summary>A context whose commands give up after <paramref name="commandTimeoutSeconds"/> (for the storage-unavailable tests).</summary>
     public PackDesignerDbContext CreateContext(int commandTimeoutSeconds) =>
-        new(PackDesignerDbContextOptions.Create(Settings with { CommandTimeoutSeconds = commandTimeoutSeconds }));
+        new(PackDesignerDbContextOptions.Create(WithCommandTimeout(commandTimeoutSeconds)));
+
+    /// <summary>A context that reports every command it runs to <paramref name="interceptor"/>.</summary>
+    public PackDesignerDbContext CreateContext(IInterceptor interceptor) =>
+        new(new DbContextOptionsBuilder<PackDesignerDbContext>(PackDesignerDbContextOptions.Create(Settings)).AddInterceptors(interceptor).Options);
 
     public DesignStore Designs(PackDesignerDbContext db) => new(db, TimeProvider.System);
 
@@ -42,6 +47,8 @@ public abstract class TestDatabase : IAsyncLifetime
     public abstract Task DisposeAsync();
 
     protected abstract Task<StorageSettings> CreateSettingsAsync();
+
+    protected abstract StorageSettings WithCommandTimeout(int seconds);
 }
 
 /// <summary>A temporary SQLite file under TMPDIR.</summary>
@@ -52,6 +59,9 @@ public sealed class SqliteTestDatabase : TestDatabase
     public string FilePath { get; } = Path.Combine(Path.GetTempPath(), $"packdesigner-test-{Guid.NewGuid():N}.db");
 
     protected override Task<StorageSettings> CreateSettingsAsync() => Task.FromResult(StorageSettings.ForSqliteFile(FilePath));
+
+    // SQLite waits for a lock up to the connection's default timeout as well as the command's.
+    protected override StorageSettings WithCommandTimeout(int seconds) => StorageSettings.ForSqliteFile(FilePath, seconds);
 
     public override Task DisposeAsync()
     {
@@ -74,6 +84,8 @@ public sealed class PostgresTestDatabase : TestDatabase
 
     protected override Task<StorageSettings> CreateSettingsAsync() =>
         Task.FromResult(StorageSettings.ForPostgres(PostgresServer.For(DatabaseName)));
+
+    protected override StorageSettings WithCommandTimeout(int seconds) => Settings with { CommandTimeoutSeconds = seconds };
 
     public override async Task DisposeAsync()
     {

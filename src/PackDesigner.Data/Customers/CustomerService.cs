@@ -96,7 +96,15 @@ public sealed class CustomerService(PackDesignerDbContext db, TimeProvider clock
                     $"This customer has {usage.Jobs} job(s) and {usage.Designs} design(s); move or remove those first."));
             }
 
-            await db.Customers.Where(c => c.Id == id).ExecuteDeleteAsync(ct);
+            try
+            {
+                await db.Customers.Where(c => c.Id == id).ExecuteDeleteAsync(ct);
+            }
+            catch (Exception ex) when (StorageFailure.IsForeignKeyViolation(ex))
+            {
+                return StoreResult<int>.Invalid("id", "A job or design was added to this customer meanwhile; it cannot be deleted.");
+            }
+
             return StoreResult<int>.Ok(id);
         });
 
@@ -181,7 +189,15 @@ public sealed class CustomerService(PackDesignerDbContext db, TimeProvider clock
                     $"{usage.Designs} design(s) belong to this job; move them to another job first."));
             }
 
-            await db.Jobs.Where(j => j.Id == jobId).ExecuteDeleteAsync(ct);
+            try
+            {
+                await db.Jobs.Where(j => j.Id == jobId).ExecuteDeleteAsync(ct);
+            }
+            catch (Exception ex) when (StorageFailure.IsForeignKeyViolation(ex))
+            {
+                return StoreResult<int>.Invalid("id", "A design was added to this job meanwhile; it cannot be deleted.");
+            }
+
             return StoreResult<int>.Ok(jobId);
         });
 

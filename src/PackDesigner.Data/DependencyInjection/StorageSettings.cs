@@ -96,6 +96,9 @@ public sealed record StorageSettings(StorageProvider Provider, string Connection
         return string.Create(CultureInfo.InvariantCulture, $"PostgreSQL {b.Host}:{b.Port}/{b.Database}");
     }
 
+    /// <summary>The same as <see cref="Describe"/>: a record's default text would show the connection string and its password.</summary>
+    public override string ToString() => Describe();
+
     private static int ReadSeconds(IConfiguration configuration, string key, int fallback)
     {
         var text = configuration[key];

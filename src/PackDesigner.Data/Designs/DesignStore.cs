@@ -164,7 +164,11 @@ public sealed class DesignStore(PackDesignerDbContext db, TimeProvider clock)
             design.CustomerId = owner;
             design.JobId = jobId;
             design.UpdatedUtc = UtcClock.Now(clock);
-            await db.SaveChangesAsync(ct);
+            if (await TrySaveAsync(ct) is { } refused)
+            {
+                return StoreResult<DesignDetails>.Conflict(refused);
+            }
+
             return await GetCoreAsync(designId, ct);
         });
 
@@ -221,7 +225,7 @@ public sealed class DesignStore(PackDesignerDbContext db, TimeProvider clock)
                 ChangedUtc = UtcClock.Now(clock),
                 Note = cleanNote,
             });
-            if (!await TrySaveAsync(ct))
+            if (await TrySaveAsync(ct) is not null)
             {
                 return StoreResult<RevisionDetails>.Conflict("Someone else changed this revision's status first. Reload to see it; nothing was saved.");
             }
@@ -351,9 +355,9 @@ public sealed class DesignStore(PackDesignerDbContext db, TimeProvider clock)
         };
         design.Revisions.Add(NewRevision(1, input, result, libraryCell, user, note, now));
         db.Designs.Add(design);
-        if (!await TrySaveAsync(ct))
+        if (await TrySaveAsync(ct) is { } refused)
         {
-            return StoreResult<DesignDetails>.Conflict("The design could not be saved because of a concurrent change. Try again.");
+            return StoreResult<DesignDetails>.Conflict(refused);
         }
 
         return await GetCoreAsync(design.Id, ct);
@@ -376,10 +380,11 @@ public sealed class DesignStore(PackDesignerDbContext db, TimeProvider clock)
         var revision = NewRevision(number, input, result, libraryCell, user, note, now);
         revision.DesignId = design.Id;
         db.DesignRevisions.Add(revision);
-        if (!await TrySaveAsync(ct))
+        if (await TrySaveAsync(ct) is { } refused)
         {
-            return StoreResult<DesignDetails>.Conflict(Text(
-                $"Revision {number} of this design was saved by someone else first. Reload the design to see it; nothing was saved."));
+            return StoreResult<DesignDetails>.Conflict(refused == ConcurrentSave
+                ? Text($"Revision {number} of this design was saved by someone else first. Reload the design to see it; nothing was saved.")
+                : refused);
         }
 
         return await GetCoreAsync(design.Id, ct);
@@ -417,23 +422,31 @@ public sealed class DesignStore(PackDesignerDbContext db, TimeProvider clock)
         return revision;
     }
 
-    /// <summary>Saves; false when a concurrency token or unique index refused it. The tracker is cleared on any failure.</summary>
-    private async Task<bool> TrySaveAsync(CancellationToken ct)
+    /// <summary>
+    /// Saves; returns null when saved, else why a concurrent change refused it (a concurrency token, the unique
+    /// revision number, or a linked customer, job or cell deleted meanwhile). The tracker is cleared on any failure.
+    /// </summary>
+    private async Task<string?> TrySaveAsync(CancellationToken ct)
     {
         try
         {
             await db.SaveChangesAsync(ct);
-            return true;
+            return null;
         }
         catch (DbUpdateConcurrencyException)
         {
             db.ChangeTracker.Clear();
-            return false;
+            return ConcurrentSave;
         }
         catch (DbUpdateException ex) when (StorageFailure.IsUniqueViolation(ex))
         {
             db.ChangeTracker.Clear();
-            return false;
+            return ConcurrentSave;
+        }
+        catch (DbUpdateException ex) when (StorageFailure.IsForeignKeyViolation(ex))
+        {
+            db.ChangeTracker.Clear();
+            return "A customer, job or library cell this design refers to was deleted meanwhile. Reload and try again; nothing was saved.";
         }
         catch
         {
@@ -441,6 +454,8 @@ public sealed class DesignStore(PackDesignerDbContext db, TimeProvider clock)
             throw;
         }
     }
+
+    private const string ConcurrentSave = "Someone else saved first.";
 
     private async Task<StoreResult<DesignDetails>> GetCoreAsync(int designId, CancellationToken ct)
     {

@@ -15,6 +15,7 @@ public static class StorageFailure
     private const int SqliteFull = 13;
     private const int SqliteCantOpen = 14;
     private const int SqliteNotADb = 26;
+    private const int SqliteConstraintForeignKey = 787;
     private const int SqliteConstraintPrimaryKey = 1555;
     private const int SqliteConstraintUnique = 2067;
 
@@ -71,6 +72,21 @@ public static class StorageFailure
         {
             if (e is PostgresException { SqlState: PostgresErrorCodes.UniqueViolation }
                 || e is SqliteException { SqliteExtendedErrorCode: SqliteConstraintUnique or SqliteConstraintPrimaryKey })
+            {
+                return true;
+            }
+        }
+
+        return false;
+    }
+
+    /// <summary>True when a foreign key refused the write (PostgreSQL 23503, SQLite SQLITE_CONSTRAINT_FOREIGNKEY).</summary>
+    public static bool IsForeignKeyViolation(Exception? exception)
+    {
+        for (var e = exception; e is not null; e = e.InnerException)
+        {
+            if (e is PostgresException { SqlState: PostgresErrorCodes.ForeignKeyViolation }
+                || e is SqliteException { SqliteExtendedErrorCode: SqliteConstraintForeignKey })
             {
                 return true;
             }

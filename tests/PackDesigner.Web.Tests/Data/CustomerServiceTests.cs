@@ -96,4 +96,17 @@ public abstract class CustomerServiceTests<TDatabase>(TDatabase database) : ICla
         var row = Assert.Single(page.Items);
         Assert.Equal((1, 1), (row.JobCount, row.DesignCount));
     }
+
+    [ProviderFact]
+    public async Task JobForAMissingCustomer_RefusedByTheForeignKey_IsRecognisedAsSuch()
+    {
+        await using var db = database.CreateContext();
+        db.Jobs.Add(new PackDesigner.Data.Entities.Job { Title = "orphan", CustomerId = int.MaxValue, CreatedUtc = DateTime.UtcNow, UpdatedUtc = DateTime.UtcNow });
+
+        var e = await Assert.ThrowsAsync<Microsoft.EntityFrameworkCore.DbUpdateException>(() => db.SaveChangesAsync());
+
+        Assert.True(PackDesigner.Data.Storage.StorageFailure.IsForeignKeyViolation(e));
+        Assert.False(PackDesigner.Data.Storage.StorageFailure.IsUniqueViolation(e));
+        Assert.False(PackDesigner.Data.Storage.StorageFailure.IsUnavailable(e));
+    }
 }

@@ -48,6 +48,15 @@ public sealed class DataServiceCollectionExtensionsTests : IDisposable
     }
 
     [Fact]
+    public void ToString_PostgresSettings_NeverShowsThePassword()
+    {
+        var settings = StorageSettings.ForPostgres("Host=h;Database=d;Username=u;Password=hunter2-secret");
+
+        Assert.DoesNotContain("hunter2", settings.ToString(), StringComparison.Ordinal);
+        Assert.DoesNotContain("hunter2", settings.Describe(), StringComparison.Ordinal);
+    }
+
+    [Fact]
     public void FromConfiguration_TimeoutInConnectionString_IsKept()
     {
         var settings = StorageSettings.FromConfiguration(Config(new()

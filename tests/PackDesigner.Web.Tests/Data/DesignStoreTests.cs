@@ -249,6 +249,24 @@ public abstract class DesignStoreTests<TDatabase>(TDatabase database) : IClassFi
     }
 
     [ProviderFact]
+    public async Task ListDesigns_SearchWithWildcardCharacters_MatchesThemLiterally()
+    {
+        var token = "wc" + Guid.NewGuid().ToString("N")[..8];
+        await using var db = Database.CreateContext();
+        var store = Database.Designs(db);
+        await store.CreateDesignAsync($"{token} 100% window", null, null, null, TestDesigns.Valid(), "a");
+        await store.CreateDesignAsync($"{token} 1000 Ah", null, null, null, TestDesigns.Valid(), "a");
+        await store.CreateDesignAsync($"{token} a_b", null, null, null, TestDesigns.Valid(), "a");
+        await store.CreateDesignAsync($"{token} axb", null, null, null, TestDesigns.Valid(), "a");
+
+        var percent = await store.ListDesignsAsync($"{token} 100%", DesignSort.NameAscending, 1, 10);
+        var underscore = await store.ListDesignsAsync($"{token} a_b", DesignSort.NameAscending, 1, 10);
+
+        Assert.Equal([$"{token} 100% window"], percent.Items.Select(r => r.Name));
+        Assert.Equal([$"{token} a_b"], underscore.Items.Select(r => r.Name));
+    }
+
+    [ProviderFact]
     public async Task ListDesigns_LatestRevisionFigures_ComeFromTheLatestRevision()
     {
         var token = "latest" + Guid.NewGuid().ToString("N")[..8];

@@ -1,6 +1,5 @@
 using Microsoft.AspNetCore.Builder;
 using Microsoft.AspNetCore.Hosting;
-using Microsoft.AspNetCore.Mvc.Testing;
 using Microsoft.Extensions.DependencyInjection;
 using PackDesigner.Web.Tests.Pages;
 using PackDesigner.Web.Tests.TestData;
@@ -37,9 +36,9 @@ public sealed class ErrorHandlingTests(ErrorHandlingTests.FailingAppFactory fact
     }
 
     /// <summary>The app with one more middleware at the end of its pipeline that throws for the paths ending in /fail.</summary>
-    public sealed class FailingAppFactory : WebApplicationFactory<Program>
+    public sealed class FailingAppFactory : IsolatedAppFactory
     {
-        protected override void ConfigureWebHost(IWebHostBuilder builder) =>
+        protected override void ConfigureTestHost(IWebHostBuilder builder) =>
             builder.ConfigureServices(s => s.AddTransient<IStartupFilter, FailingStartupFilter>());
     }
 

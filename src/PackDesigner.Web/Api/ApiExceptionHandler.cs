@@ -1,5 +1,6 @@
 using Microsoft.AspNetCore.Diagnostics;
 using Microsoft.AspNetCore.Mvc;
+using PackDesigner.Data.Storage;
 
 namespace PackDesigner.Web.Api;
 
@@ -27,17 +28,29 @@ public sealed partial class ApiExceptionHandler(IProblemDetailsService problems,
             ProblemDetails = new ProblemDetails
             {
                 Status = status,
-                Title = status == StatusCodes.Status500InternalServerError ? "An unexpected error occurred." : "The request could not be read.",
-                Detail = status == StatusCodes.Status500InternalServerError
-                    ? "The error has been logged. Please try again or report the request that caused it."
-                    : "Check the request's size, headers and body.",
+                Title = status switch
+                {
+                    StatusCodes.Status500InternalServerError => "An unexpected error occurred.",
+                    StatusCodes.Status503ServiceUnavailable => "Storage unavailable.",
+                    _ => "The request could not be read.",
+                },
+                Detail = status switch
+                {
+                    StatusCodes.Status500InternalServerError => "The error has been logged. Please try again or report the request that caused it.",
+                    StatusCodes.Status503ServiceUnavailable => "The design database cannot be reached. Nothing was saved; try again in a moment.",
+                    _ => "Check the request's size, headers and body.",
+                },
             },
         });
     }
 
     /// <summary>Client errors the server raises while reading a request keep their 4xx status; the rest are 500.</summary>
-    public static int StatusOf(Exception exception) =>
-        exception is BadHttpRequestException bad ? bad.StatusCode : StatusCodes.Status500InternalServerError;
+    public static int StatusOf(Exception exception) => exception switch
+    {
+        BadHttpRequestException bad => bad.StatusCode,
+        _ when StorageFailure.IsUnavailable(exception) => StatusCodes.Status503ServiceUnavailable,
+        _ => StatusCodes.Status500InternalServerError,
+    };
 
     [LoggerMessage(Level = LogLevel.Error, Message = "Unhandled exception on {Method} {Path}, answered with {Status}")]
     private static partial void LogFailure(ILogger logger, Exception exception, string method, string path, int status);

@@ -1,0 +1,28 @@
+using PackDesigner.Reports.Charts;
+using PackDesigner.Reports.Model;
+
+namespace PackDesigner.Reports.Pdf.Sections;
+
+/// <summary>The two charts, drawn at print resolution and fitted to the text column.</summary>
+internal sealed class ChartsSection : ISheetSection
+{
+    /// <summary>Image pixels per layout point: 2.5 gives 180 dpi.</summary>
+    internal const double PrintScale = 2.5;
+
+    public string Title => "Charts";
+
+    public void Render(DesignSheetModel model, SheetLayout layout)
+    {
+        var width = (int)Math.Floor(layout.ContentWidth);
+        const int ocvHeight = 275;
+        const int ladderHeight = 290;
+        layout.EnsureSpace(ocvHeight + 50);
+        layout.SubHeading(model.OcvChart.Title);
+        layout.Image(SheetCharts.OcvChart(model.OcvChart, width, ocvHeight, PrintScale, ChartImageFormat.Jpeg), ocvHeight,
+            "Rest voltage of the whole pack across the state of charge; the shaded band is the usable window.");
+        layout.EnsureSpace(ladderHeight + 50);
+        layout.SubHeading(model.LadderChart.Title);
+        layout.Image(SheetCharts.LadderChart(model.LadderChart, width, ladderHeight, PrintScale, ChartImageFormat.Jpeg), ladderHeight,
+            "Every voltage layer per cell, to scale, highest first; each must sit at or below the one above it.");
+    }
+}

@@ -61,9 +61,11 @@ public static class DesignSheetRenderer
             layout.Finish();
         }
 
-        using var output = new MemoryStream();
+        using var output = new MemoryStream(512 * 1024);
         document.Save(output, closeStream: false);
-        return Deterministic.Stabilise(output.ToArray(), id);
+        var bytes = output.ToArray();
+        Deterministic.Stabilise(bytes, id);
+        return bytes;
     }
 
     /// <summary>16 bytes from the input hash, revision and time: equal for equal revisions, different otherwise.</summary>

@@ -112,8 +112,8 @@ public static class SheetFormatter
 
     public static string VoltageClassName(VoltageClass voltageClass) => voltageClass switch
     {
-        VoltageClass.A => "A (up to 60 V DC)",
-        VoltageClass.B => "B (over 60 V DC)",
+        VoltageClass.A => "A (up to 60 V DC, ISO 6469-3)",
+        VoltageClass.B => "B (over 60 V DC, ISO 6469-3)",
         _ => "Above B (over 1500 V DC)",
     };
 

@@ -85,21 +85,22 @@ internal static class DesignSheetModelBuilder
         var p = r.Pack;
         var e = r.Energy;
         var window = string.Create(Inv, $"{F.Trimmed(input.SocWindow.MinPercent, 2)}–{F.Trimmed(input.SocWindow.MaxPercent, 2)} %");
+        // In reading order for two columns: the descriptive figures first, then the numbers.
         return
         [
             new("configuration", "Configuration", string.Create(Inv, $"{p.Configuration} ({p.CellCount} cells)")),
             new("chemistry", "Chemistry", F.ChemistryName(r.Cell.Chemistry)),
             new("balancing", "Balancing", F.BalancingName(input.Balancing)),
-            new("voltage-class", "Voltage class (ISO 6469-3)", F.VoltageClassName(p.VoltageClass)),
+            new("voltage-class", "Voltage class", F.VoltageClassName(p.VoltageClass)),
+            new("findings", "Findings", Counts(r.Findings)),
+            new("nominal-energy", "Nominal energy", F.Energy(e.NominalEnergyWh).Text),
+            new("usable-energy", "Usable energy", $"{F.Energy(e.UsableEnergyWh).Text} (window {window})"),
             new("nominal-voltage", "Pack nominal voltage", F.PackVoltage(p.NominalVoltage).Text),
             new("max-voltage", "Pack maximum voltage", F.PackVoltage(p.MaxVoltage).Text),
             new("min-voltage", "Pack minimum voltage", F.PackVoltage(p.MinVoltage).Text),
             new("capacity", "Capacity", F.Capacity(p.CapacityAh).Text),
-            new("nominal-energy", "Nominal energy", F.Energy(e.NominalEnergyWh).Text),
-            new("usable-energy", $"Usable energy ({window})", F.Energy(e.UsableEnergyWh).Text),
             new("mass", "Cell mass", F.Mass(e.CellMassKg).Text),
             new("specific-energy", "Specific energy (cells)", F.SpecificEnergy(e.SpecificEnergyWhPerKg).Text),
-            new("findings", "Findings", Counts(r.Findings)),
         ];
     }
 

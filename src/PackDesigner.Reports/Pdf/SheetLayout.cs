@@ -33,6 +33,7 @@ public sealed class SheetLayout : IDisposable
     private readonly DesignSheetModel _model;
     private readonly Dictionary<(bool Bold, double Size), XFont> _fonts = [];
     private readonly List<PdfPage> _pages = [];
+    private readonly PendingHeadings _pending = new();
     private XGraphics? _gfx;
     private double _y;
     private int _sectionNumber;
@@ -68,41 +69,71 @@ public sealed class SheetLayout : IDisposable
 
     private XGraphics G => _gfx ?? throw new InvalidOperationException("The layout is finished.");
 
-    /// <summary>A numbered section heading; it starts a new page when too little room is left for anything after it.</summary>
+    /// <summary>A numbered section heading, kept on one page with the start of what follows it.</summary>
     public void SectionHeading(string title)
     {
         _sectionNumber++;
-        if (_sectionNumber > 1)
-        {
-            _y += 10;
-        }
-
-        EnsureSpace(22 + 60);
-        var font = Font(true, 13);
         var text = _sectionNumber.ToString(CultureInfo.InvariantCulture) + "  " + title;
-        G.DrawString(text, font, new XSolidBrush(Accent), new XPoint(Left, _y + 13 * 0.93));
-        _y += 19;
-        G.DrawLine(new XPen(Accent, 0.8), Left, _y, Left + ContentWidth, _y);
-        _y += 8;
+        var first = _sectionNumber == 1;
+        _pending.Add((_sectionNumber == 1 ? 0 : 10) + 27, () =>
+        {
+            if (!first && _y > Top + 0.5)
+            {
+                _y += 10;
+            }
+
+            G.DrawString(text, Font(true, 13), new XSolidBrush(Accent), new XPoint(Left, _y + 13 * 0.93));
+            _y += 19;
+            G.DrawLine(new XPen(Accent, 0.8), Left, _y, Left + ContentWidth, _y);
+            _y += 8;
+        });
     }
 
-    /// <summary>A smaller heading inside a section, kept with what follows it.</summary>
+    /// <summary>A smaller heading inside a section, kept on one page with the start of what follows it.</summary>
     public void SubHeading(string title)
     {
-        _y += 4;
-        EnsureSpace(16 + 40);
-        DrawLines(Wrap(title, Font(true, 10), ContentWidth), Font(true, 10), Left, Accent);
-        _y += 2;
+        var font = Font(true, 10);
+        var lines = Wrap(title, font, ContentWidth);
+        _pending.Add(6 + lines.Count * LineHeight(font), () =>
+        {
+            _y += 4;
+            DrawLines(lines, font, Left, Accent);
+            _y += 2;
+        });
     }
 
-    /// <summary>A wrapped paragraph; it may continue on the next page line by line.</summary>
-    public void Paragraph(string text, bool bold = false, double size = 9, bool muted = false)
+    /// <summary>
+    /// A wrapped paragraph; it may continue on the next page, two lines at least on each side. With
+    /// <paramref name="keepWithNext"/> it stays on one page with the start of the block after it (for an
+    /// introduction of a table).
+    /// </summary>
+    public void Paragraph(string text, bool bold = false, double size = 9, bool muted = false, bool keepWithNext = false)
     {
         var font = Font(bold, size);
-        foreach (var line in Wrap(text, font, ContentWidth))
+        var lines = Wrap(text, font, ContentWidth);
+        var lineHeight = LineHeight(font);
+        var color = muted ? Muted : Ink;
+        if (keepWithNext)
         {
-            EnsureSpace(LineHeight(font));
-            DrawLines([line], font, Left, muted ? Muted : Ink);
+            _pending.Add(lines.Count * lineHeight + 4, () =>
+            {
+                DrawLines(lines, font, Left, color);
+                _y += 4;
+            });
+            return;
+        }
+
+        Begin(Math.Min(lines.Count, 2) * lineHeight);
+        for (var i = 0; i < lines.Count; i++)
+        {
+            var left = lines.Count - i;
+            // Widow control: never leave a single last line alone at the top of the next page.
+            if (_y + lineHeight > Bottom || (left == 2 && i > 0 && _y + 2 * lineHeight > Bottom))
+            {
+                NewPage();
+            }
+
+            DrawLines([lines[i]], font, Left, color);
         }
 
         _y += 4;
@@ -114,7 +145,7 @@ public sealed class SheetLayout : IDisposable
     /// <summary>A bulleted list; each item is kept on one page.</summary>
     public void Bullets(IReadOnlyList<string> items) => List(items, _ => "•");
 
-    /// <summary>A titled block (bold title over a wrapped paragraph) kept on one page.</summary>
+    /// <summary>A titled block (bold title over a wrapped paragraph, a red rule beside it) kept on one page.</summary>
     public void Block(string title, string text)
     {
         var titleFont = Font(true, 9);
@@ -122,7 +153,7 @@ public sealed class SheetLayout : IDisposable
         var titleLines = Wrap(title, titleFont, ContentWidth - 8);
         var lines = Wrap(text, font, ContentWidth - 8);
         var height = titleLines.Count * LineHeight(titleFont) + lines.Count * LineHeight(font);
-        EnsureSpace(height + 6);
+        Begin(height + 6);
         G.DrawRectangle(new XSolidBrush(DraftRed), Left, _y + 1, 2.2, height - 2);
         DrawLines(titleLines, titleFont, Left + 8, Ink);
         DrawLines(lines, font, Left + 8, Ink);
@@ -132,21 +163,21 @@ public sealed class SheetLayout : IDisposable
     /// <summary>Vertical space, points.</summary>
     public void Space(double points) => _y = Math.Min(_y + points, Bottom);
 
-    /// <summary>Starts a new page unless at least <paramref name="height"/> points are left.</summary>
+    /// <summary>Starts a new page unless at least <paramref name="height"/> points are left (pending headings included).</summary>
     public void EnsureSpace(double height)
     {
-        if (_y + height > Bottom && _y > Top + 0.5)
+        if (_y + PendingHeight + height > Bottom && _y > Top + 0.5)
         {
             NewPage();
         }
     }
 
-    /// <summary>A PNG or JPEG image scaled to the content width (keeping its aspect ratio), with a caption under it, kept on one page.</summary>
+    /// <summary>A PNG or JPEG image across the content width, with a caption under it, kept on one page.</summary>
     public void Image(byte[] image, double heightPoints, string? caption = null)
     {
         var captionFont = Font(false, 8);
         var captionLines = caption is null ? [] : Wrap(caption, captionFont, ContentWidth);
-        EnsureSpace(heightPoints + captionLines.Count * LineHeight(captionFont) + 8);
+        Begin(heightPoints + captionLines.Count * LineHeight(captionFont) + 8);
         using (var stream = new MemoryStream(image, writable: false))
         using (var picture = XImage.FromStream(stream))
         {
@@ -158,7 +189,10 @@ public sealed class SheetLayout : IDisposable
         _y += 8;
     }
 
-    /// <summary>A table; see <see cref="SheetTable"/> for how it breaks across pages.</summary>
+    /// <summary>
+    /// A table; see <see cref="SheetTable"/>. A table that fits in a third of a page is kept on one page; a longer
+    /// one breaks between rows, never leaving fewer than two rows on either side of a break.
+    /// </summary>
     public void Table(SheetTable table)
     {
         var widths = ColumnWidths(table.Columns);
@@ -169,14 +203,26 @@ public sealed class SheetLayout : IDisposable
         var headHeight = head.Max(l => l.Count) * LineHeight(headFont) + 2 * CellPadY;
         var rows = table.Rows.Select(r => Measure(r, table.Columns, widths, bodyFont, boldFont, headFont)).ToList();
         var continuedFont = Font(true, 8);
-        var continuedHeight = LineHeight(continuedFont) + 2;
+        var total = headHeight + rows.Sum(r => r.Height);
 
-        var first = rows.Count == 0 ? 0 : rows[0].Height + (table.Rows[0].IsGroupHeading && rows.Count > 1 ? rows[1].Height : 0);
-        EnsureSpace(headHeight + first);
+        var keepTogether = total <= ContentHeight / 3;
+        Begin(keepTogether ? total : headHeight + rows.Take(2).Sum(r => r.Height));
         DrawHead();
         for (var i = 0; i < rows.Count; i++)
         {
-            var needed = rows[i].Height + (table.Rows[i].IsGroupHeading && i + 1 < rows.Count ? rows[i + 1].Height : 0);
+            // The rows that must go with this one: a group heading takes its first row along, and the last two
+            // rows stay together so the next page never starts with a lone row.
+            var needed = rows[i].Height;
+            if (table.Rows[i].IsGroupHeading && i + 1 < rows.Count)
+            {
+                needed += rows[i + 1].Height;
+            }
+
+            if (i == rows.Count - 2)
+            {
+                needed = rows[i].Height + rows[i + 1].Height;
+            }
+
             if (_y + needed > Bottom)
             {
                 NewPage();
@@ -189,11 +235,10 @@ public sealed class SheetLayout : IDisposable
                 DrawHead();
             }
 
-            DrawRow(table.Rows[i], rows[i], table.Columns, widths, i);
+            DrawRow(table.Rows[i], rows[i], table.Columns, widths);
         }
 
         _y += 8;
-        _ = continuedHeight;
 
         void DrawHead()
         {
@@ -215,7 +260,7 @@ public sealed class SheetLayout : IDisposable
     {
         const double boxHeight = 58;
         var height = lines.Count * (boxHeight + 6);
-        EnsureSpace(height);
+        Begin(height);
         var labelFont = Font(true, 9);
         var valueFont = Font(false, 9.5);
         var smallFont = Font(false, 7);
@@ -252,6 +297,11 @@ public sealed class SheetLayout : IDisposable
     /// <summary>Draws every page's header and footer; call once, after the last section.</summary>
     internal void Finish()
     {
+        if (_pending.Count > 0)
+        {
+            Begin(0);
+        }
+
         _gfx?.Dispose();
         _gfx = null;
         for (var i = 0; i < _pages.Count; i++)
@@ -266,6 +316,22 @@ public sealed class SheetLayout : IDisposable
     {
         _gfx?.Dispose();
         _gfx = null;
+    }
+
+    private double PendingHeight => _pending.Height;
+
+    /// <summary>
+    /// Starts a block whose first unbreakable part is <paramref name="firstPart"/> points high: the pending headings
+    /// and that part go on one page, then the headings are drawn.
+    /// </summary>
+    private void Begin(double firstPart)
+    {
+        if (_y + _pending.Height + firstPart > Bottom && _y > Top + 0.5)
+        {
+            NewPage();
+        }
+
+        _pending.Draw();
     }
 
     private void NewPage()
@@ -326,7 +392,7 @@ public sealed class SheetLayout : IDisposable
         for (var i = 0; i < items.Count; i++)
         {
             var lines = Wrap(items[i], font, ContentWidth - indent);
-            EnsureSpace(lines.Count * LineHeight(font) + 3);
+            Begin(lines.Count * LineHeight(font) + 3);
             G.DrawString(marker(i), font, new XSolidBrush(Ink), new XPoint(Left, _y + Ascent(font)));
             DrawLines(lines, font, Left + indent, Ink);
             _y += 3;
@@ -356,7 +422,7 @@ public sealed class SheetLayout : IDisposable
         return (height + 2 * CellPadY, cells);
     }
 
-    private void DrawRow(SheetTableRow row, (double Height, List<string>[] Cells) measured, IReadOnlyList<SheetColumn> columns, double[] widths, int index)
+    private void DrawRow(SheetTableRow row, (double Height, List<string>[] Cells) measured, IReadOnlyList<SheetColumn> columns, double[] widths)
     {
         if (row.IsGroupHeading)
         {
@@ -376,7 +442,6 @@ public sealed class SheetLayout : IDisposable
 
         _y += measured.Height;
         G.DrawLine(new XPen(Rule, 0.4), Left, _y, Left + ContentWidth, _y);
-        _ = index;
     }
 
     private void DrawCell(List<string> lines, XFont font, double x, double width, ColumnAlign align, XColor color, double top)
@@ -542,5 +607,27 @@ public sealed class SheetLayout : IDisposable
         }
 
         return list;
+    }
+
+    /// <summary>Headings waiting for the block they belong to, with the height they will take.</summary>
+    private sealed class PendingHeadings
+    {
+        private readonly List<(double Height, Action Draw)> _items = [];
+
+        public double Height => _items.Sum(i => i.Height);
+
+        public int Count => _items.Count;
+
+        public void Add(double height, Action draw) => _items.Add((height, draw));
+
+        public void Draw()
+        {
+            foreach (var item in _items)
+            {
+                item.Draw();
+            }
+
+            _items.Clear();
+        }
     }
 }

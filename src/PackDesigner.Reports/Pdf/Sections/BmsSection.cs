@@ -9,7 +9,7 @@ internal sealed class BmsSection : ISheetSection
 
     public void Render(DesignSheetModel model, SheetLayout layout)
     {
-        layout.Paragraph(model.BmsNote, muted: true);
+        layout.Paragraph(model.BmsNote, muted: true, keepWithNext: true);
         var rows = new List<SheetTableRow>();
         string? group = null;
         foreach (var s in model.BmsSettings)

@@ -10,7 +10,7 @@ internal sealed class BuildNotesSection : ISheetSection
     public void Render(DesignSheetModel model, SheetLayout layout)
     {
         layout.SubHeading(model.BuildNotes.Title);
-        layout.Paragraph(model.BuildNotes.Introduction);
+        layout.Paragraph(model.BuildNotes.Introduction, keepWithNext: true);
         layout.Steps(model.BuildNotes.Steps);
     }
 }

@@ -9,7 +9,7 @@ internal sealed class FindingsSection : ISheetSection
 
     public void Render(DesignSheetModel model, SheetLayout layout)
     {
-        layout.Paragraph(model.FindingCounts, bold: true);
+        layout.Paragraph(model.FindingCounts, bold: true, keepWithNext: model.Findings.Count > 0);
         if (model.Findings.Count == 0)
         {
             layout.Paragraph("The checks raised nothing.");

@@ -14,7 +14,7 @@ internal sealed class ProtectionSection : ISheetSection
             layout.SubHeading(group.Title);
             if (group.Note is { } note)
             {
-                layout.Paragraph(note, muted: true);
+                layout.Paragraph(note, muted: true, keepWithNext: group.Rows.Count > 0);
             }
 
             if (group.Rows.Count > 0)

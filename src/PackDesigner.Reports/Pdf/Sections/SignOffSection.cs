@@ -11,7 +11,7 @@ internal sealed class SignOffSection : ISheetSection
     {
         layout.Paragraph(model.IsDraft
             ? "This sheet is a draft until the approval is recorded; every page is marked so."
-            : model.SignOffMarking + ".", bold: model.IsDraft);
+            : model.SignOffMarking + ".", bold: model.IsDraft, keepWithNext: true);
         layout.SignOffBlock(model.SignOff);
     }
 }

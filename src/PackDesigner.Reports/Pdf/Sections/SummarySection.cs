@@ -22,6 +22,6 @@ internal sealed class SummarySection : ISheetSection
             rows.Add(SheetTableRow.Of(left.Label, left.Value, right?.Label ?? "", right?.Value ?? ""));
         }
 
-        layout.Table(new SheetTable(Title, [new("Pack", 1.0), new("", 1.2, Bold: true), new("", 1.0), new("", 1.1, Bold: true)], rows));
+        layout.Table(new SheetTable(Title, [new("Pack", 0.95), new("", 1.45, Bold: true), new("", 1.0), new("", 0.9, Bold: true)], rows));
     }
 }

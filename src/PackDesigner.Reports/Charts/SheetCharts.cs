@@ -12,7 +12,7 @@ public enum ChartImageFormat
     Png,
     /// <summary>
     /// JPEG at quality 92 without chroma subsampling: PDFsharp embeds it as it is, where a PNG would have to be
-    /// decoded and compressed again (about ten times slower).
+    /// decoded and compressed again (about three times the cost of the chart).
     /// </summary>
     Jpeg,
 }

@@ -67,6 +67,9 @@ public sealed class DesignSheetModel
 
     public required IReadOnlyList<InputGroup> Inputs { get; init; }
 
+    /// <summary>The note above the inputs on where preset figures come from.</summary>
+    public required string InputsNote { get; init; }
+
     public required IReadOnlyList<BmsSetting> BmsSettings { get; init; }
 
     /// <summary>How to read the BMS table (per cell / per pack).</summary>

@@ -43,6 +43,7 @@ internal static class DesignSheetModelBuilder
             ],
             Summary = Summary(input, result),
             Inputs = Inputs(input, result),
+            InputsNote = "Cell figures marked \"Preset (typical)\" are the chemistry preset's typical values, used where no datasheet figure was entered: check them against the cell maker's datasheet.",
             BmsSettings = Bms(result),
             BmsNote = string.Create(Inv,
                 $"Per cell: one cell, or one parallel group of {result.Pack.Parallel} for voltages. Per pack: voltages × {result.Pack.Series} (series), currents × {result.Pack.Parallel} (parallel). Delays and temperatures are the same for both."),
@@ -382,6 +383,7 @@ internal static class DesignSheetModelBuilder
         ChartLine Line(string key, string label, double volts) => new(key, $"{label} {F.PackVoltage(volts).Text}", volts);
         return new OcvChartModel(
             "Pack open-circuit voltage against state of charge",
+            "Rest voltage of the whole pack across the state of charge; the shaded band is the usable window.",
             "State of charge (%)",
             "Pack voltage at rest (V)",
             curve,
@@ -399,6 +401,7 @@ internal static class DesignSheetModelBuilder
 
     private static LadderChartModel Ladder(EvaluationResult r) => new(
         "Protection ladder, to scale per cell",
+        "Every voltage layer per cell, to scale, highest first; each must sit at or below the one above it.",
         "Voltage per cell (V)",
         r.Ladder.Select(l => new LadderRung(l.Layer, l.Label, l.PerCellVoltage, F.CellVoltage(l.PerCellVoltage), F.PackVoltage(l.PackVoltage))).ToList());
 

@@ -44,6 +44,7 @@ public sealed record ChartLine(string Key, string Label, double Value);
 /// <summary>Pack open-circuit voltage against state of charge (%, V), the window shaded, the limits as lines.</summary>
 public sealed record OcvChartModel(
     string Title,
+    string Caption,
     string XLabel,
     string YLabel,
     IReadOnlyList<ChartPoint> Curve,
@@ -56,4 +57,4 @@ public sealed record OcvChartModel(
 public sealed record LadderRung(string Key, string Label, double PerCellVoltage, SheetValue PerCell, SheetValue PerPack);
 
 /// <summary>The protection ladder drawn to scale per cell, highest layer first.</summary>
-public sealed record LadderChartModel(string Title, string YLabel, IReadOnlyList<LadderRung> Rungs);
+public sealed record LadderChartModel(string Title, string Caption, string YLabel, IReadOnlyList<LadderRung> Rungs);

@@ -19,14 +19,14 @@ public sealed class SheetLayout : IDisposable
     private const double CellPadY = 3;
 
     private static readonly XPdfFontOptions Unicode = new(PdfFontEncoding.Unicode);
-    internal static readonly XColor Ink = XColor.FromArgb(26, 26, 26);
-    internal static readonly XColor Muted = XColor.FromArgb(90, 96, 102);
-    internal static readonly XColor Accent = XColor.FromArgb(31, 78, 121);
-    internal static readonly XColor Rule = XColor.FromArgb(192, 198, 204);
-    internal static readonly XColor HeadFill = XColor.FromArgb(226, 233, 240);
-    internal static readonly XColor GroupFill = XColor.FromArgb(243, 245, 247);
-    internal static readonly XColor DraftRed = XColor.FromArgb(176, 0, 32);
-    internal static readonly XColor SignedGreen = XColor.FromArgb(30, 110, 50);
+    private static readonly XColor Ink = XColor.FromArgb(26, 26, 26);
+    private static readonly XColor Muted = XColor.FromArgb(90, 96, 102);
+    private static readonly XColor Accent = XColor.FromArgb(31, 78, 121);
+    private static readonly XColor Rule = XColor.FromArgb(192, 198, 204);
+    private static readonly XColor HeadFill = XColor.FromArgb(226, 233, 240);
+    private static readonly XColor GroupFill = XColor.FromArgb(243, 245, 247);
+    private static readonly XColor DraftRed = XColor.FromArgb(176, 0, 32);
+    private static readonly XColor SignedGreen = XColor.FromArgb(30, 110, 50);
 
     private readonly PdfDocument _document;
     private readonly PaperSize _paper;
@@ -52,11 +52,6 @@ public sealed class SheetLayout : IDisposable
     /// <summary>Height available for content on one page, points.</summary>
     public double ContentHeight => Bottom - Top;
 
-    /// <summary>Space left on the current page, points.</summary>
-    public double RemainingHeight => Bottom - _y;
-
-    internal int PageCount => _pages.Count;
-
     private double PageWidth => _paper == PaperSize.A4 ? 595.276 : 612;
 
     private double PageHeight => _paper == PaperSize.A4 ? 841.89 : 792;
@@ -69,8 +64,8 @@ public sealed class SheetLayout : IDisposable
 
     private XGraphics G => _gfx ?? throw new InvalidOperationException("The layout is finished.");
 
-    /// <summary>A numbered section heading, kept on one page with the start of what follows it.</summary>
-    public void SectionHeading(string title)
+    /// <summary>A numbered section heading, kept on one page with the start of what follows it (the renderer's).</summary>
+    internal void SectionHeading(string title)
     {
         _sectionNumber++;
         var text = _sectionNumber.ToString(CultureInfo.InvariantCulture) + "  " + title;

@@ -158,6 +158,16 @@ public sealed class DesignSheetRendererTests
     }
 
     [Fact]
+    public void RenderPdf_StandardDesign_NoNonFiniteNumberPrinted()
+    {
+        var flat = Standard.Value.Text.Flat;
+        Assert.DoesNotContain("NaN", flat, StringComparison.Ordinal);
+        Assert.DoesNotContain("Infinity", flat, StringComparison.Ordinal);
+        Assert.DoesNotContain("∞", flat, StringComparison.Ordinal);
+        Assert.DoesNotContain(SheetFormatter.NotAvailable + " ", flat, StringComparison.Ordinal);
+    }
+
+    [Fact]
     public void RenderPdf_StandardDesign_PageCountPlausible()
     {
         var (_, _, _, text) = Standard.Value;

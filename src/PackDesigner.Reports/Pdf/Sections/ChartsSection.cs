@@ -17,10 +17,8 @@ internal sealed class ChartsSection : ISheetSection
         const int ocvHeight = 275;
         const int ladderHeight = 290;
         layout.SubHeading(model.OcvChart.Title);
-        layout.Image(SheetCharts.OcvChart(model.OcvChart, width, ocvHeight, PrintScale, ChartImageFormat.Jpeg), ocvHeight,
-            "Rest voltage of the whole pack across the state of charge; the shaded band is the usable window.");
+        layout.Image(SheetCharts.OcvChart(model.OcvChart, width, ocvHeight, PrintScale, ChartImageFormat.Jpeg), ocvHeight, model.OcvChart.Caption);
         layout.SubHeading(model.LadderChart.Title);
-        layout.Image(SheetCharts.LadderChart(model.LadderChart, width, ladderHeight, PrintScale, ChartImageFormat.Jpeg), ladderHeight,
-            "Every voltage layer per cell, to scale, highest first; each must sit at or below the one above it.");
+        layout.Image(SheetCharts.LadderChart(model.LadderChart, width, ladderHeight, PrintScale, ChartImageFormat.Jpeg), ladderHeight, model.LadderChart.Caption);
     }
 }

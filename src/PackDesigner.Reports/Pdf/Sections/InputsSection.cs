@@ -9,7 +9,7 @@ internal sealed class InputsSection : ISheetSection
 
     public void Render(DesignSheetModel model, SheetLayout layout)
     {
-        layout.Paragraph("Cell figures marked \"Preset (typical)\" are the chemistry preset's typical values, used where no datasheet figure was entered: check them against the cell maker's datasheet.", muted: true, keepWithNext: true);
+        layout.Paragraph(model.InputsNote, muted: true, keepWithNext: true);
         foreach (var group in model.Inputs)
         {
             layout.SubHeading(group.Title);

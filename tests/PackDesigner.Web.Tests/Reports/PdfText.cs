@@ -51,7 +51,7 @@ internal sealed partial class PdfText
         var fonts = new Dictionary<string, bool>();
         foreach (var page in document.GetPages())
         {
-            words.Add(page.GetWords().Select(w => (w.Text, w.BoundingBox.Left, Math.Round(w.BoundingBox.Bottom * 2) / 2)).ToList());
+            words.Add(page.GetWords().Select(w => (w.Text, w.BoundingBox.Left, Baseline(w))).ToList());
             lines.Add(Lines(page));
             sizes.Add((page.Width, page.Height));
             images.Add(page.GetImages().Count());
@@ -94,10 +94,13 @@ internal sealed partial class PdfText
 
     private static List<string> Lines(Page page) =>
         page.GetWords()
-            .GroupBy(w => Math.Round(w.BoundingBox.Bottom * 2) / 2)
+            .GroupBy(Baseline)
             .OrderByDescending(g => g.Key)
             .Select(g => string.Join(" ", g.OrderBy(w => w.BoundingBox.Left).Select(w => w.Text)))
             .ToList();
+
+    /// <summary>The word's baseline, to half a point: words of one line share it whatever their descenders.</summary>
+    private static double Baseline(Word word) => Math.Round(word.Letters[0].StartBaseLine.Y * 2) / 2;
 
     private static void CollectFonts(PigPdf document, Page page, Dictionary<string, bool> fonts)
     {

@@ -1,0 +1,16 @@
+using PackDesigner.Reports.Model;
+
+namespace PackDesigner.Reports.Pdf;
+
+/// <summary>
+/// One section of the design sheet. The renderer prints the numbered heading, then calls <see cref="Render"/>;
+/// a new section (a spread histogram, an ageing forecast) is a new implementation added to the list given to
+/// <see cref="DesignSheetRenderer.RenderPdf(DesignSheetModel, PaperSize, IReadOnlyList{ISheetSection})"/>.
+/// </summary>
+public interface ISheetSection
+{
+    /// <summary>The heading, without its number.</summary>
+    string Title { get; }
+
+    void Render(DesignSheetModel model, SheetLayout layout);
+}

@@ -3,6 +3,7 @@ using Microsoft.AspNetCore.Http.Features;
 using Microsoft.AspNetCore.Localization;
 using Microsoft.AspNetCore.Server.Kestrel.Core;
 using PackDesigner.Web.Api;
+using PackDesigner.Web.Pages.Sheets;
 
 namespace PackDesigner.Web;
 
@@ -19,6 +20,7 @@ public static class WebSetup
         services.ConfigureHttpJsonOptions(o => ApiJson.Configure(o.SerializerOptions));
         services.AddProblemDetails();
         services.AddExceptionHandler<ApiExceptionHandler>();
+        services.AddScoped<RevisionSheetService>();
 
         // Numbers are read and written with the invariant culture whatever the client or the server's locale is.
         services.AddRequestLocalization(o =>
@@ -54,6 +56,7 @@ public static class WebSetup
         app.MapStaticAssets();
         app.MapRazorPages().WithStaticAssets();
         app.MapPackDesignerApi();
+        app.MapSheetEndpoints();
         return app;
     }
 }

@@ -90,6 +90,15 @@ public class StorageBenchmarks
         return _latest;
     }
 
+    /// <summary>One round trip to the server (<c>SELECT 1</c> on a pooled connection): the unit the other figures are made of.</summary>
+    [Benchmark(Baseline = true)]
+    public async Task<int> RoundTrip()
+    {
+        using var scope = _services.CreateScope();
+        var db = scope.ServiceProvider.GetRequiredService<PackDesignerDbContext>();
+        return await db.Database.SqlQueryRaw<int>("SELECT 1 AS \"Value\"").SingleAsync();
+    }
+
     /// <summary>The list query alone: first page of 25 by last change, with the count.</summary>
     [Benchmark]
     public async Task<int> ListQuery()

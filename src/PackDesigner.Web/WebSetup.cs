@@ -4,6 +4,8 @@ using Microsoft.AspNetCore.Localization;
 using Microsoft.AspNetCore.Server.Kestrel.Core;
 using PackDesigner.Web.Api;
 using PackDesigner.Web.Pages.Sheets;
+using PackDesigner.Web.Pages.Designs;
+using PackDesigner.Web.Storage;
 
 namespace PackDesigner.Web;
 
@@ -15,12 +17,18 @@ public static class WebSetup
 
     public static IServiceCollection AddPackDesignerWeb(this IServiceCollection services)
     {
-        services.AddRazorPages()
+        services.AddRazorPages(o => o.Conventions.AddPageRoute(DesignRoutes.EditorPage, DesignRoutes.New))
             .AddMvcOptions(o => o.SuppressImplicitRequiredAttributeForNonNullableReferenceTypes = true);
         services.ConfigureHttpJsonOptions(o => ApiJson.Configure(o.SerializerOptions));
         services.AddProblemDetails();
+        // Exception handlers run in this order: the observer only clears connection pools after an outage.
+        services.AddExceptionHandler<StorageOutageObserver>();
         services.AddExceptionHandler<ApiExceptionHandler>();
         services.AddScoped<RevisionSheetService>();
+        services.AddSingleton<StorageGate>();
+        services.AddPackDesignerHealth();
+        services.AddOpenApi();
+        services.AddScoped<DesignLinkChoices>();
 
         // Numbers are read and written with the invariant culture whatever the client or the server's locale is.
         services.AddRequestLocalization(o =>
@@ -53,10 +61,23 @@ public static class WebSetup
         app.UseWhen(c => !ApiEndpoints.IsApiRequest(c), pages => pages.UseStatusCodePagesWithReExecute("/Error", "?statusCode={0}"));
         app.UseRequestLocalization();
         app.UseRouting();
-        app.MapStaticAssets();
+        app.Use(async (context, next) =>
+        {
+            if (StorageGate.Needs(context))
+            {
+                await context.RequestServices.GetRequiredService<StorageGate>().EnsureOpenAsync(context.RequestAborted);
+            }
+
+            await next(context);
+        });
+        app.MapStaticAssets().WithMetadata(StorageFreeAttribute.Instance);
         app.MapRazorPages().WithStaticAssets();
+        app.MapOpenApi().WithMetadata(StorageFreeAttribute.Instance);
+        app.MapPackDesignerHealth();
         app.MapPackDesignerApi();
         app.MapSheetEndpoints();
+        app.MapDesignApi();
+        app.MapDesignExport();
         return app;
     }
 }

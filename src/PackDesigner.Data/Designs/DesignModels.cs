@@ -105,3 +105,6 @@ public enum DesignSort
 
 /// <summary>A change of the library cell link on save: <c>new CellLink(5)</c> links cell 5, <c>new CellLink(null)</c> unlinks.</summary>
 public sealed record CellLink(int? CellId);
+
+/// <summary>A change of the customer and job on save: a job alone implies its customer; both null means none.</summary>
+public sealed record DesignOwner(int? CustomerId, int? JobId);

@@ -24,18 +24,27 @@ public sealed class DesignStore(PackDesignerDbContext db, TimeProvider clock)
 {
     public const int MaxPageSize = 100;
 
-    /// <summary>Creates a design with revision 1 of <paramref name="input"/>.</summary>
+    /// <summary>Creates a design with revision 1 of <paramref name="input"/>; <paramref name="note"/> is that revision's note.</summary>
     public Task<StoreResult<DesignDetails>> CreateDesignAsync(string name, int? customerId, int? jobId, int? cellId,
-        DesignInput input, string createdBy, CancellationToken ct = default) =>
-        StorageFailure.GuardAsync(() => CreateCoreAsync(name, customerId, jobId, cellId, input, createdBy, null, ct));
+        DesignInput input, string createdBy, string? note = null, CancellationToken ct = default) =>
+        StorageFailure.GuardAsync(async () =>
+        {
+            var errors = new List<ValidationError>();
+            var cleanNote = TextRules.Optional(errors, "note", note, FieldLengths.Note);
+            return errors.Count > 0
+                ? StoreResult<DesignDetails>.Invalid(errors)
+                : await CreateCoreAsync(name, customerId, jobId, cellId, input, createdBy, cleanNote, ct);
+        });
 
     /// <summary>
     /// Saves <paramref name="input"/> as the next revision, based on revision <paramref name="basedOnRevision"/>;
     /// Conflict when that is no longer the latest. <paramref name="name"/> renames the design when given;
-    /// <paramref name="cell"/> changes the library cell link when given (otherwise the current link is kept).
+    /// <paramref name="cell"/> changes the library cell link when given (otherwise the current link is kept);
+    /// <paramref name="owner"/> changes the customer and job when given, in the same transaction as the revision.
     /// </summary>
     public Task<StoreResult<DesignDetails>> SaveRevisionAsync(int designId, int basedOnRevision, DesignInput input,
-        string createdBy, string? name = null, string? note = null, CellLink? cell = null, CancellationToken ct = default) =>
+        string createdBy, string? name = null, string? note = null, CellLink? cell = null, DesignOwner? owner = null,
+        CancellationToken ct = default) =>
         StorageFailure.GuardAsync(async () =>
         {
             ArgumentNullException.ThrowIfNull(input);
@@ -62,11 +71,18 @@ public sealed class DesignStore(PackDesignerDbContext db, TimeProvider clock)
                 errors.Add(new ValidationError("cellId", "There is no such cell in the library."));
             }
 
+            var customerId = owner is null ? design.CustomerId : await ResolveOwnerAsync(owner.CustomerId, owner.JobId, errors, ct);
             var result = Evaluate(input, errors);
             if (errors.Count > 0 || result is null)
             {
                 db.ChangeTracker.Clear();
                 return StoreResult<DesignDetails>.Invalid(errors);
+            }
+
+            if (owner is not null)
+            {
+                design.CustomerId = customerId;
+                design.JobId = owner.JobId;
             }
 
             return await AppendRevisionAsync(design, basedOnRevision, input, result, libraryCell, libraryCell?.Id, user, cleanNote, newName, ct);

@@ -2,6 +2,7 @@ using Microsoft.AspNetCore.Http.Json;
 using Microsoft.Extensions.Options;
 using PackDesigner.Core.Cells;
 using PackDesigner.Core.Evaluation;
+using PackDesigner.Web.Storage;
 
 namespace PackDesigner.Web.Api;
 
@@ -17,10 +18,17 @@ public static class ApiEndpoints
     public static IEndpointRouteBuilder MapPackDesignerApi(this IEndpointRouteBuilder app)
     {
         app.MapPost(Evaluate, EvaluateAsync)
+            .Accepts<EvaluateRequest>("application/json")
             .Produces<EvaluationResult>()
             .ProducesValidationProblem()
+            .WithTags("Evaluate")
+            .WithSummary("Evaluates a design without saving it.")
+            .WithMetadata(StorageFreeAttribute.Instance)
             .DisableAntiforgery();
-        app.MapGet(Presets, () => TypedResults.Ok(PresetsResponse.From(ChemistryPresets.All)));
+        app.MapGet(Presets, () => TypedResults.Ok(PresetsResponse.From(ChemistryPresets.All)))
+            .WithTags("Evaluate")
+            .WithSummary("The chemistry presets and the sources of their typical figures.")
+            .WithMetadata(StorageFreeAttribute.Instance);
         return app;
     }
 

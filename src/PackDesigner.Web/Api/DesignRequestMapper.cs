@@ -123,33 +123,10 @@ public static class DesignRequestMapper
     /// <summary>The request that describes <paramref name="design"/> (every cell figure as given, margins only when set).</summary>
     public static EvaluateRequest ToRequest(DesignInput design)
     {
-        var c = design.Cell;
         var m = design.Margins;
         return new EvaluateRequest
         {
-            Cell = new CellRequest
-            {
-                Chemistry = c.Chemistry,
-                CapacityAh = c.CapacityAh,
-                NominalVoltage = c.NominalVoltage,
-                MaxChargeVoltage = c.MaxChargeVoltage,
-                MinDischargeVoltage = c.MinDischargeVoltage,
-                MaxChargeCurrentA = c.MaxChargeCurrentA,
-                MaxDischargeCurrentA = c.MaxDischargeCurrentA,
-                PeakDischargeCurrentA = c.PeakDischargeCurrentA,
-                PeakDischargeDurationS = c.PeakDischargeDurationS,
-                InternalResistanceMilliohm = c.InternalResistanceMilliohm,
-                ColdInternalResistanceMilliohm = c.ColdInternalResistanceMilliohm,
-                ColdResistanceTemperatureC = c.ColdResistanceTemperatureC,
-                MassKg = c.MassKg,
-                CapacityTolerancePercent = c.CapacityTolerancePercent,
-                ChargeTemperatureMinC = c.ChargeTemperatureMinC,
-                ChargeTemperatureMaxC = c.ChargeTemperatureMaxC,
-                DischargeTemperatureMinC = c.DischargeTemperatureMinC,
-                DischargeTemperatureMaxC = c.DischargeTemperatureMaxC,
-                TerminationCurrentA = c.TerminationCurrentA,
-                OcvCurve = c.OcvCurve?.Select(p => new OcvPointRequest { SocPercent = p.SocPercent, Voltage = p.Voltage }).ToList(),
-            },
+            Cell = ToCellRequest(design.Cell),
             Series = design.Series,
             Parallel = design.Parallel,
             LinkResistanceMilliohm = design.LinkResistanceMilliohm,
@@ -193,6 +170,31 @@ public static class DesignRequestMapper
             },
         };
     }
+
+    /// <summary>The request member of a cell: every figure as given, the OCV table only when set.</summary>
+    public static CellRequest ToCellRequest(CellInput c) => new()
+    {
+        Chemistry = c.Chemistry,
+        CapacityAh = c.CapacityAh,
+        NominalVoltage = c.NominalVoltage,
+        MaxChargeVoltage = c.MaxChargeVoltage,
+        MinDischargeVoltage = c.MinDischargeVoltage,
+        MaxChargeCurrentA = c.MaxChargeCurrentA,
+        MaxDischargeCurrentA = c.MaxDischargeCurrentA,
+        PeakDischargeCurrentA = c.PeakDischargeCurrentA,
+        PeakDischargeDurationS = c.PeakDischargeDurationS,
+        InternalResistanceMilliohm = c.InternalResistanceMilliohm,
+        ColdInternalResistanceMilliohm = c.ColdInternalResistanceMilliohm,
+        ColdResistanceTemperatureC = c.ColdResistanceTemperatureC,
+        MassKg = c.MassKg,
+        CapacityTolerancePercent = c.CapacityTolerancePercent,
+        ChargeTemperatureMinC = c.ChargeTemperatureMinC,
+        ChargeTemperatureMaxC = c.ChargeTemperatureMaxC,
+        DischargeTemperatureMinC = c.DischargeTemperatureMinC,
+        DischargeTemperatureMaxC = c.DischargeTemperatureMaxC,
+        TerminationCurrentA = c.TerminationCurrentA,
+        OcvCurve = c.OcvCurve?.Select(p => new OcvPointRequest { SocPercent = p.SocPercent, Voltage = p.Voltage }).ToList(),
+    };
 
     private static CellInput? MapCell(CellRequest? c, Collector e)
     {

@@ -36,6 +36,27 @@ public static class Numbers
     public static string Quantity(double? value, int decimals, string unit) =>
         value is { } v ? Quantity(v, decimals, unit) : Missing;
 
+    /// <summary>
+    /// A value with at most <paramref name="significant"/> significant digits and no trailing zeros, for comparing
+    /// stored figures (3.6500000000000004 shows as 3.65).
+    /// </summary>
+    public static string Compact(double value, int significant = 6)
+    {
+        if (!double.IsFinite(value))
+        {
+            return Missing;
+        }
+
+        if (value == 0)
+        {
+            return "0";
+        }
+
+        var decimals = Math.Clamp(significant - 1 - (int)Math.Floor(Math.Log10(Math.Abs(value))), 0, 12);
+        var text = Fixed(value, decimals);
+        return text.Contains('.', StringComparison.Ordinal) ? text.TrimEnd('0').TrimEnd('.') : text;
+    }
+
     /// <summary>The shortest text that parses back to the same value, for form fields.</summary>
     public static string ForInput(double? value) =>
         value is { } v && double.IsFinite(v) ? v.ToString("R", CultureInfo.InvariantCulture) : string.Empty;

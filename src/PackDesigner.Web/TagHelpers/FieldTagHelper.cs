@@ -9,7 +9,7 @@ namespace PackDesigner.Web.TagHelpers;
 /// <summary>
 /// One form field with its label, unit, hint and error messages:
 /// <c>&lt;pd-field asp-for="Input.Cell.CapacityAh" unit="Ah" hint="…" /&gt;</c>. The control is a text input, or
-/// with <c>kind</c> a checkbox, a select (options from <c>items</c>) or a textarea. The control is described by
+/// with <c>kind</c> a checkbox, a select (options from <c>items</c>, grouped by their <c>Group</c>) or a textarea. The control is described by
 /// its hint and error, marked invalid when it has errors, and shows the text as typed. Errors come from model
 /// state; the error element carries <c>data-testid="error-{api path}"</c>.
 /// </summary>
@@ -25,7 +25,7 @@ public sealed class FieldTagHelper : TagHelper
 
     public string? Placeholder { get; set; }
 
-    /// <summary>"text" (default), "integer", "checkbox", "select" or "textarea".</summary>
+    /// <summary>"text" (default, a number), "integer", "plain" (free text such as a name), "checkbox", "select" or "textarea".</summary>
     public string Kind { get; set; } = "text";
 
     /// <summary>The options of a select.</summary>
@@ -146,6 +146,7 @@ public sealed class FieldTagHelper : TagHelper
                 hidden.Attributes["value"] = "false";
                 return new HtmlContentBuilder().AppendHtml(control).AppendHtml(hidden);
             case "select":
+                TagBuilder? group = null;
                 foreach (var item in Items)
                 {
                     var option = new TagBuilder("option");
@@ -156,7 +157,22 @@ public sealed class FieldTagHelper : TagHelper
                     }
 
                     option.InnerHtml.Append(item.Text);
-                    control.InnerHtml.AppendHtml(option);
+                    // Items of one SelectListGroup in a row share an optgroup.
+                    if (item.Group is null)
+                    {
+                        group = null;
+                        control.InnerHtml.AppendHtml(option);
+                        continue;
+                    }
+
+                    if (group is null || group.Attributes["label"] != item.Group.Name)
+                    {
+                        group = new TagBuilder("optgroup");
+                        group.Attributes["label"] = item.Group.Name;
+                        control.InnerHtml.AppendHtml(group);
+                    }
+
+                    group.InnerHtml.AppendHtml(option);
                 }
 
                 return control;
@@ -171,9 +187,13 @@ public sealed class FieldTagHelper : TagHelper
             default:
                 control.TagRenderMode = TagRenderMode.SelfClosing;
                 control.Attributes["type"] = "text";
-                control.Attributes["inputmode"] = Kind == "integer" ? "numeric" : "decimal";
+                if (Kind != "plain")
+                {
+                    control.Attributes["inputmode"] = Kind == "integer" ? "numeric" : "decimal";
+                }
+
                 control.Attributes["autocomplete"] = "off";
-                control.Attributes["spellcheck"] = "false";
+                control.Attributes["spellcheck"] = Kind == "plain" ? "true" : "false";
                 control.Attributes["value"] = text;
                 SetPlaceholder(control);
                 return control;

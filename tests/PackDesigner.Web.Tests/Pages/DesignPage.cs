@@ -12,17 +12,25 @@ public sealed class DesignPage
 {
     private static readonly HtmlParser Parser = new();
 
-    private DesignPage(int status, IHtmlDocument document)
+    private DesignPage(int status, IHtmlDocument document, Uri? location, string html)
     {
         Status = status;
         Document = document;
+        Location = location;
+        Html = html;
     }
 
     public int Status { get; }
 
+    /// <summary>Where a redirect points (the client does not follow redirects in these tests).</summary>
+    public Uri? Location { get; }
+
+    /// <summary>The page's HTML as sent.</summary>
+    public string Html { get; }
+
     public IHtmlDocument Document { get; }
 
-    public IElement Form => Document.QuerySelector("[data-testid='design-form']") ?? throw new InvalidOperationException("The page has no design form.");
+    public IElement Form => Document.QuerySelector($"[data-testid='{_formTestId}']") ?? throw new InvalidOperationException($"The page has no form '{_formTestId}'.");
 
     public static async Task<DesignPage> OpenAsync(HttpClient client, string path = "/")
     {
@@ -72,13 +80,53 @@ public sealed class DesignPage
         return await ReadAsync(response);
     }
 
+    /// <summary>
+    /// Presses a submit button of the form (by its data-testid), as a browser does: the form's fields with some
+    /// replaced, the button's own name and value, posted to the button's formaction (or the form's action).
+    /// </summary>
+    public async Task<DesignPage> PressAsync(HttpClient client, string buttonTestId, IReadOnlyDictionary<string, string>? overrides = null)
+    {
+        var button = ByTestId(buttonTestId) ?? throw new InvalidOperationException($"The page has no button '{buttonTestId}'.");
+        var fields = Fields()
+            .Where(f => overrides is null || !overrides.ContainsKey(f.Key))
+            .Concat(overrides ?? new Dictionary<string, string>())
+            .ToList();
+        if (button.GetAttribute("name") is { Length: > 0 } name)
+        {
+            fields.Add(new(name, button.GetAttribute("value") ?? string.Empty));
+        }
+
+        var action = button.GetAttribute("formaction") is { Length: > 0 } formAction ? formAction
+            : Form.GetAttribute("action") is { Length: > 0 } a ? a : "/";
+        using var content = new FormUrlEncodedContent(fields);
+        using var response = await client.PostAsync(System.Net.WebUtility.HtmlDecode(action), content);
+        return await ReadAsync(response);
+    }
+
+    /// <summary>Posts the form to <paramref name="action"/> with some fields replaced (for a page handler no button names).</summary>
+    public async Task<DesignPage> PostToAsync(HttpClient client, string action, IReadOnlyDictionary<string, string>? overrides = null)
+    {
+        var fields = Fields()
+            .Where(f => overrides is null || !overrides.ContainsKey(f.Key))
+            .Concat(overrides ?? new Dictionary<string, string>())
+            .ToList();
+        using var content = new FormUrlEncodedContent(fields);
+        using var response = await client.PostAsync(action, content);
+        return await ReadAsync(response);
+    }
+
     public IElement? ByTestId(string testId) => Document.QuerySelector($"[data-testid='{testId}']");
 
     public IReadOnlyList<IElement> Findings => Document.QuerySelectorAll("[data-testid='finding']").ToList();
 
-    private static async Task<DesignPage> ReadAsync(HttpResponseMessage response)
+    public static async Task<DesignPage> ReadAsync(HttpResponseMessage response)
     {
         var html = await response.Content.ReadAsStringAsync();
-        return new DesignPage((int)response.StatusCode, await Parser.ParseDocumentAsync(html));
+        return new DesignPage((int)response.StatusCode, await Parser.ParseDocumentAsync(html), response.Headers.Location, html);
     }
+
+    /// <summary>A page with another form as "the form" (for example the import or restore form).</summary>
+    public DesignPage WithForm(string formTestId) => new(Status, Document, Location, Html) { _formTestId = formTestId };
+
+    private string _formTestId = "design-form";
 }

@@ -20,6 +20,21 @@ public static class ApiClient
         return await ApiAnswer.ReadAsync(response);
     }
 
+    public static async Task<ApiAnswer> PutRawAsync(this HttpClient client, string path, string body, string contentType = "application/json")
+    {
+        using var content = new StringContent(body, Encoding.UTF8);
+        content.Headers.ContentType = new MediaTypeHeaderValue(contentType);
+        using var response = await client.PutAsync(path, content);
+        return await ApiAnswer.ReadAsync(response);
+    }
+
+    public static async Task<ApiAnswer> SendAnswerAsync(this HttpClient client, HttpMethod method, string path)
+    {
+        using var request = new HttpRequestMessage(method, path);
+        using var response = await client.SendAsync(request);
+        return await ApiAnswer.ReadAsync(response);
+    }
+
     public static async Task<ApiAnswer> GetAnswerAsync(this HttpClient client, string path)
     {
         using var response = await client.GetAsync(path);
@@ -33,7 +48,9 @@ public sealed record ApiAnswer(int Status, string? MediaType, JsonElement Body)
     public static async Task<ApiAnswer> ReadAsync(HttpResponseMessage response)
     {
         var text = await response.Content.ReadAsStringAsync();
-        var body = text.Length == 0 ? default : JsonDocument.Parse(text).RootElement.Clone();
+        var body = text.Length == 0 || !(response.Content.Headers.ContentType?.MediaType?.Contains("json", StringComparison.Ordinal) ?? false)
+            ? default
+            : JsonDocument.Parse(text).RootElement.Clone();
         return new ApiAnswer((int)response.StatusCode, response.Content.Headers.ContentType?.MediaType, body);
     }
 

@@ -8,6 +8,9 @@ using PackDesigner.Web.Formatting;
 
 namespace PackDesigner.Web.Pages.Designs;
 
+/// <summary>What the form says: the Core input when it is complete and valid, and the evaluation outcome.</summary>
+public sealed record FormReading(DesignInput? Input, EvaluationOutcome Outcome);
+
 /// <summary>
 /// Between the design form's text and the API contract: the page parses its fields (invariant culture) into an
 /// <see cref="EvaluateRequest"/> and then shares the API's mapping and Core's evaluation.
@@ -24,53 +27,38 @@ public static class DesignFormMapper
     /// Parses and evaluates the form. Every problem comes back keyed by API path: parse errors first, then the
     /// mapping's and Core's for the other fields. A result is given only when there is no error at all.
     /// </summary>
-    public static EvaluationOutcome Evaluate(DesignForm form)
+    public static EvaluationOutcome Evaluate(DesignForm form) => Read(form).Outcome;
+
+    /// <summary>
+    /// As <see cref="Evaluate"/>, and also the Core input the form describes (null unless the outcome has a result),
+    /// for saving it.
+    /// </summary>
+    public static FormReading Read(DesignForm form)
     {
         var parser = new Parser();
         var request = parser.ToRequest(form);
         var outcome = DesignRequestMapper.Evaluate(request);
         if (parser.Errors.Count == 0)
         {
-            return outcome;
+            return new FormReading(outcome.IsValid ? DesignRequestMapper.TryMap(request, out _) : null, outcome);
         }
 
         var parsed = parser.Errors.Select(e => e.Field).ToHashSet(StringComparer.Ordinal);
         var rest = outcome.Errors.Where(e => !parsed.Contains(e.Field) && !(parsed.Any(IsOcv) && IsOcv(e.Field)));
-        return new EvaluationOutcome(null, [.. parser.Errors, .. rest]);
+        return new FormReading(null, new EvaluationOutcome(null, [.. parser.Errors, .. rest]));
     }
+
+    /// <summary>The form showing a saved Core input.</summary>
+    public static DesignForm FromInput(DesignInput input) => FromRequest(DesignRequestMapper.ToRequest(input));
 
     /// <summary>The form showing <paramref name="request"/>; margins left out of the request show their defaults.</summary>
     public static DesignForm FromRequest(EvaluateRequest request)
     {
-        var c = request.Cell ?? new CellRequest();
         var m = request.Margins ?? new MarginsRequest();
         var d = new MarginsInput();
         return new DesignForm
         {
-            Cell = new CellForm
-            {
-                Chemistry = Name(c.Chemistry),
-                CapacityAh = Numbers.ForInput(c.CapacityAh),
-                NominalVoltage = Numbers.ForInput(c.NominalVoltage),
-                MaxChargeVoltage = Numbers.ForInput(c.MaxChargeVoltage),
-                MinDischargeVoltage = Numbers.ForInput(c.MinDischargeVoltage),
-                MaxChargeCurrentA = Numbers.ForInput(c.MaxChargeCurrentA),
-                MaxDischargeCurrentA = Numbers.ForInput(c.MaxDischargeCurrentA),
-                PeakDischargeCurrentA = Numbers.ForInput(c.PeakDischargeCurrentA),
-                PeakDischargeDurationS = Numbers.ForInput(c.PeakDischargeDurationS),
-                InternalResistanceMilliohm = Numbers.ForInput(c.InternalResistanceMilliohm),
-                ColdInternalResistanceMilliohm = Numbers.ForInput(c.ColdInternalResistanceMilliohm),
-                ColdResistanceTemperatureC = Numbers.ForInput(c.ColdResistanceTemperatureC),
-                MassKg = Numbers.ForInput(c.MassKg),
-                CapacityTolerancePercent = Numbers.ForInput(c.CapacityTolerancePercent),
-                ChargeTemperatureMinC = Numbers.ForInput(c.ChargeTemperatureMinC),
-                ChargeTemperatureMaxC = Numbers.ForInput(c.ChargeTemperatureMaxC),
-                DischargeTemperatureMinC = Numbers.ForInput(c.DischargeTemperatureMinC),
-                DischargeTemperatureMaxC = Numbers.ForInput(c.DischargeTemperatureMaxC),
-                TerminationCurrentA = Numbers.ForInput(c.TerminationCurrentA),
-                OcvTable = c.OcvCurve is null ? null : string.Join('\n',
-                    c.OcvCurve.Select(p => $"{Numbers.ForInput(p?.SocPercent)},{Numbers.ForInput(p?.Voltage)}")),
-            },
+            Cell = CellFromRequest(request.Cell ?? new CellRequest()),
             Series = Numbers.ForInput(request.Series),
             Parallel = Numbers.ForInput(request.Parallel),
             LinkResistanceMilliohm = Numbers.ForInput(request.LinkResistanceMilliohm),
@@ -126,6 +114,32 @@ public static class DesignFormMapper
             },
         };
     }
+
+    /// <summary>The cell section of the form showing <paramref name="c"/> (for example a library cell's figures).</summary>
+    public static CellForm CellFromRequest(CellRequest c) => new()
+    {
+        Chemistry = Name(c.Chemistry),
+        CapacityAh = Numbers.ForInput(c.CapacityAh),
+        NominalVoltage = Numbers.ForInput(c.NominalVoltage),
+        MaxChargeVoltage = Numbers.ForInput(c.MaxChargeVoltage),
+        MinDischargeVoltage = Numbers.ForInput(c.MinDischargeVoltage),
+        MaxChargeCurrentA = Numbers.ForInput(c.MaxChargeCurrentA),
+        MaxDischargeCurrentA = Numbers.ForInput(c.MaxDischargeCurrentA),
+        PeakDischargeCurrentA = Numbers.ForInput(c.PeakDischargeCurrentA),
+        PeakDischargeDurationS = Numbers.ForInput(c.PeakDischargeDurationS),
+        InternalResistanceMilliohm = Numbers.ForInput(c.InternalResistanceMilliohm),
+        ColdInternalResistanceMilliohm = Numbers.ForInput(c.ColdInternalResistanceMilliohm),
+        ColdResistanceTemperatureC = Numbers.ForInput(c.ColdResistanceTemperatureC),
+        MassKg = Numbers.ForInput(c.MassKg),
+        CapacityTolerancePercent = Numbers.ForInput(c.CapacityTolerancePercent),
+        ChargeTemperatureMinC = Numbers.ForInput(c.ChargeTemperatureMinC),
+        ChargeTemperatureMaxC = Numbers.ForInput(c.ChargeTemperatureMaxC),
+        DischargeTemperatureMinC = Numbers.ForInput(c.DischargeTemperatureMinC),
+        DischargeTemperatureMaxC = Numbers.ForInput(c.DischargeTemperatureMaxC),
+        TerminationCurrentA = Numbers.ForInput(c.TerminationCurrentA),
+        OcvTable = c.OcvCurve is null ? null : string.Join('\n',
+            c.OcvCurve.Select(p => $"{Numbers.ForInput(p?.SocPercent)},{Numbers.ForInput(p?.Voltage)}")),
+    };
 
     private static bool IsOcv(string field) => field.StartsWith(FormFieldPaths.OcvApiPath, StringComparison.Ordinal);
 

@@ -6,7 +6,10 @@ namespace PackDesigner.Web.Pages.Designs;
 public sealed record SummaryError(string Label, string? Anchor, string Message)
 {
     /// <summary>Errors not tied to a field first, then in the order the fields appear on the form.</summary>
-    public static IReadOnlyList<SummaryError> From(ModelStateDictionary state)
+    public static IReadOnlyList<SummaryError> From(ModelStateDictionary state) => From(state, []);
+
+    /// <summary>As <see cref="From(ModelStateDictionary)"/>, with the page's own <paramref name="ownFields"/> before the design's.</summary>
+    public static IReadOnlyList<SummaryError> From(ModelStateDictionary state, IEnumerable<FormField> ownFields)
     {
         var list = new List<SummaryError>();
         if (state.TryGetValue(string.Empty, out var general))
@@ -14,7 +17,7 @@ public sealed record SummaryError(string Label, string? Anchor, string Message)
             list.AddRange(general.Errors.Select(e => new SummaryError("Design", null, e.ErrorMessage)));
         }
 
-        foreach (var field in FormFieldPaths.All)
+        foreach (var field in ownFields.DistinctBy(f => f.FormKey).Concat(FormFieldPaths.All))
         {
             if (state.TryGetValue(field.FormKey, out var entry))
             {

@@ -43,6 +43,22 @@ public abstract class DesignPagesTests<TFactory>(TFactory factory) : IClassFixtu
     }
 
     [ProviderFact]
+    public async Task View_SheetLinks_OpenThePrintViewAndThePdfOfTheShownRevision()
+    {
+        var id = await _client.NewDesignIdAsync("Sheet links " + Guid.NewGuid());
+        var view = await DesignPage.OpenAsync(_client, DesignRoutes.View(id));
+
+        var sheetHref = view.ByTestId("sheet-link")!.GetAttribute("href")!;
+        var pdfHref = view.ByTestId("sheet-pdf-link")!.GetAttribute("href")!;
+        Assert.Equal($"/designs/{id}/revisions/1/sheet", sheetHref);
+        using var sheet = await _client.GetAsync(sheetHref);
+        Assert.Equal(System.Net.HttpStatusCode.OK, sheet.StatusCode);
+        using var pdf = await _client.GetAsync(pdfHref);
+        Assert.Equal("application/pdf", pdf.Content.Headers.ContentType!.MediaType);
+        Assert.StartsWith("%PDF-", System.Text.Encoding.ASCII.GetString(await pdf.Content.ReadAsByteArrayAsync())[..5]);
+    }
+
+    [ProviderFact]
     public async Task Edit_SaveChangedField_AddsRevision2()
     {
         var id = await _client.NewDesignIdAsync("Edit me " + Guid.NewGuid());

@@ -21,6 +21,8 @@ public static class ApiEndpoints
             .ProducesValidationProblem()
             .DisableAntiforgery();
         app.MapGet(Presets, () => TypedResults.Ok(PresetsResponse.From(ChemistryPresets.All)));
+        app.MapCellEndpoints();
+        app.MapCustomerEndpoints();
         return app;
     }
 

@@ -19,6 +19,7 @@ public static class WebSetup
         services.ConfigureHttpJsonOptions(o => ApiJson.Configure(o.SerializerOptions));
         services.AddProblemDetails();
         services.AddExceptionHandler<ApiExceptionHandler>();
+        services.AddScoped<Demo.DemoLoader>();
 
         // Numbers are read and written with the invariant culture whatever the client or the server's locale is.
         services.AddRequestLocalization(o =>

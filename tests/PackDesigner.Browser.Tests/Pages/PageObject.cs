@@ -19,10 +19,15 @@ public abstract partial class PageObject(IPage page)
     /// Clicks a control that submits a form or follows a link and waits for the new document (the old one is
     /// marked first, so a post that re-renders the same address is waited for too).
     /// </summary>
-    protected async Task SubmitAsync(string testId)
+    protected Task SubmitAsync(string testId) => NavigateByAsync(() => ByTestId(testId).ClickAsync());
+
+    /// <summary>Presses Enter in a field, as people do to send a form, and waits for the page it leads to.</summary>
+    public Task PressEnterAsync(string name) => NavigateByAsync(() => Field(name).PressAsync("Enter"));
+
+    private async Task NavigateByAsync(Func<Task> action)
     {
         await Page.EvaluateAsync("() => { window.__pdBefore = true; }");
-        await ByTestId(testId).ClickAsync();
+        await action();
         await Page.WaitForFunctionAsync("() => window.__pdBefore !== true");
         await Page.WaitForLoadStateAsync(LoadState.Load);
     }

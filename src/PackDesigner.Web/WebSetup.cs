@@ -29,6 +29,7 @@ public static class WebSetup
         services.AddPackDesignerHealth();
         services.AddOpenApi();
         services.AddScoped<DesignLinkChoices>();
+        services.AddScoped<Demo.DemoLoader>();
 
         // Numbers are read and written with the invariant culture whatever the client or the server's locale is.
         services.AddRequestLocalization(o =>

@@ -114,6 +114,18 @@ public sealed partial class CellLibrary(PackDesignerDbContext db, TimeProvider c
             return StoreResult<CellDetails>.Ok(CellMapping.ToDetails(cell));
         });
 
+    /// <summary>How many designs link to the cell (each keeps its own copy of the figures); NotFound when there is no such cell.</summary>
+    public Task<StoreResult<int>> CountLinkedDesignsAsync(int id, CancellationToken ct = default) =>
+        StorageFailure.GuardAsync(async () =>
+        {
+            if (!await db.Cells.AnyAsync(c => c.Id == id, ct))
+            {
+                return NotFound<int>(id);
+            }
+
+            return StoreResult<int>.Ok(await db.Designs.CountAsync(d => d.CellId == id, ct));
+        });
+
     /// <summary>Deletes a cell; designs linked to it keep their figures and lose the link.</summary>
     public Task<StoreResult<int>> DeleteAsync(int id, long expectedVersion, CancellationToken ct = default) =>
         StorageFailure.GuardAsync(async () =>

@@ -311,32 +311,58 @@ public sealed class DesignStore(PackDesignerDbContext db, TimeProvider clock)
                     || (d.Cell != null && d.Cell.SearchKey.Contains(key)));
             }
 
-            var total = await query.CountAsync(ct);
-            var rows = await Sort(query, sort)
-                .Skip((page - 1) * pageSize)
-                .Take(pageSize)
-                .Select(d => new DesignRow(
-                    d.Id,
-                    d.Name,
-                    d.CustomerId,
-                    d.Customer!.Name,
-                    d.JobId,
-                    d.Job!.Title,
-                    d.CellId,
-                    d.Cell!.Name,
-                    d.LatestRevisionNumber,
-                    d.Revisions.Where(r => r.Number == d.LatestRevisionNumber).Select(r => r.Series).FirstOrDefault(),
-                    d.Revisions.Where(r => r.Number == d.LatestRevisionNumber).Select(r => r.Parallel).FirstOrDefault(),
-                    d.Revisions.Where(r => r.Number == d.LatestRevisionNumber)
-                        .SelectMany(r => r.StatusChanges)
-                        .OrderByDescending(s => s.Sequence)
-                        .Select(s => s.Status)
-                        .FirstOrDefault(),
-                    d.CreatedUtc,
-                    d.UpdatedUtc))
-                .ToListAsync(ct);
-            return new PagedResult<DesignRow>(rows, total, page, pageSize);
+            return await PageOfAsync(query, sort, page, pageSize, ct);
         });
+
+    /// <summary>
+    /// One page of the designs of customer <paramref name="customerId"/> (a design under one of its jobs belongs to it too), in
+    /// <paramref name="sort"/> order; NotFound when there is no such customer. Paging runs in SQL as for
+    /// <see cref="ListDesignsAsync"/>.
+    /// </summary>
+    public Task<StoreResult<PagedResult<DesignRow>>> ListCustomerDesignsAsync(int customerId, DesignSort sort, int page, int pageSize,
+        CancellationToken ct = default) =>
+        StorageFailure.GuardAsync(async () =>
+        {
+            if (!await db.Customers.AnyAsync(c => c.Id == customerId, ct))
+            {
+                return StoreResult<PagedResult<DesignRow>>.NotFound(Text($"There is no customer {customerId}."));
+            }
+
+            page = Math.Max(1, page);
+            pageSize = Math.Clamp(pageSize, 1, MaxPageSize);
+            var query = db.Designs.AsNoTracking().Where(d => d.CustomerId == customerId);
+            return StoreResult<PagedResult<DesignRow>>.Ok(await PageOfAsync(query, sort, page, pageSize, ct));
+        });
+
+    /// <summary>The rows of one page of <paramref name="query"/> and its total count: two queries, latest-revision figures included.</summary>
+    private async Task<PagedResult<DesignRow>> PageOfAsync(IQueryable<Design> query, DesignSort sort, int page, int pageSize, CancellationToken ct)
+    {
+        var total = await query.CountAsync(ct);
+        var rows = await Sort(query, sort)
+            .Skip((page - 1) * pageSize)
+            .Take(pageSize)
+            .Select(d => new DesignRow(
+                d.Id,
+                d.Name,
+                d.CustomerId,
+                d.Customer!.Name,
+                d.JobId,
+                d.Job!.Title,
+                d.CellId,
+                d.Cell!.Name,
+                d.LatestRevisionNumber,
+                d.Revisions.Where(r => r.Number == d.LatestRevisionNumber).Select(r => r.Series).FirstOrDefault(),
+                d.Revisions.Where(r => r.Number == d.LatestRevisionNumber).Select(r => r.Parallel).FirstOrDefault(),
+                d.Revisions.Where(r => r.Number == d.LatestRevisionNumber)
+                    .SelectMany(r => r.StatusChanges)
+                    .OrderByDescending(s => s.Sequence)
+                    .Select(s => s.Status)
+                    .FirstOrDefault(),
+                d.CreatedUtc,
+                d.UpdatedUtc))
+            .ToListAsync(ct);
+        return new PagedResult<DesignRow>(rows, total, page, pageSize);
+    }
 
     private async Task<StoreResult<DesignDetails>> CreateCoreAsync(string name, int? customerId, int? jobId, int? cellId,
         DesignInput input, string createdBy, string? note, CancellationToken ct)

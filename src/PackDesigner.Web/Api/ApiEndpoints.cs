@@ -29,6 +29,8 @@ public static class ApiEndpoints
             .WithTags("Evaluate")
             .WithSummary("The chemistry presets and the sources of their typical figures.")
             .WithMetadata(StorageFreeAttribute.Instance);
+        app.MapCellEndpoints();
+        app.MapCustomerEndpoints();
         return app;
     }
 

@@ -1,4 +1,5 @@
 using PackDesigner.Core.Validation;
+using PackDesigner.Data.Results;
 
 namespace PackDesigner.Web.Api;
 
@@ -22,4 +23,25 @@ public static class ApiProblems
 
     public static IResult Status(int statusCode, string title, string detail) =>
         TypedResults.Problem(statusCode: statusCode, title: title, detail: detail);
+
+    public static IResult NotFound(string message) => Status(StatusCodes.Status404NotFound, "Not found.", message);
+
+    public static IResult Conflict(string message) => Status(StatusCodes.Status409Conflict, "Conflict.", message);
+
+    /// <summary>
+    /// The ProblemDetails of a failed store operation: 400 with its field errors (keys rewritten by
+    /// <paramref name="fieldPath"/> into the request's paths), 404 or 409 with the store's message.
+    /// </summary>
+    /// <exception cref="ArgumentException">The result is Ok.</exception>
+    public static IResult From<T>(StoreResult<T> result, Func<string, string>? fieldPath = null)
+    {
+        ArgumentNullException.ThrowIfNull(result);
+        return result.Status switch
+        {
+            StoreStatus.Invalid => Invalid(result.Errors.Select(e => fieldPath is null ? e : e with { Field = fieldPath(e.Field) })),
+            StoreStatus.NotFound => NotFound(result.Message!),
+            StoreStatus.Conflict => Conflict(result.Message!),
+            _ => throw new ArgumentException("An Ok result is not a problem.", nameof(result)),
+        };
+    }
 }

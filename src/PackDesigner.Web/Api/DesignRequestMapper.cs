@@ -26,7 +26,7 @@ public static class DesignRequestMapper
         if (design is not null)
         {
             var outcome = DesignEvaluator.Evaluate(design);
-            return outcome.IsValid ? outcome : outcome with { Errors = ExplainPresetCurve(request, outcome.Errors) };
+            return outcome.IsValid ? outcome : outcome with { Errors = ExplainPresetCurve(request.Cell, outcome.Errors) };
         }
 
         // The rest of the design is incomplete, but the cell's own checks can still be reported in the same answer.
@@ -44,9 +44,10 @@ public static class DesignRequestMapper
     /// When no table was sent, Core checks the chemistry preset's typical curve against the entered voltages; its
     /// row errors would point at rows the client never sent, so they become one message about the preset.
     /// </summary>
-    private static IReadOnlyList<ValidationError> ExplainPresetCurve(EvaluateRequest request, IReadOnlyList<ValidationError> errors)
+    public static IReadOnlyList<ValidationError> ExplainPresetCurve(CellRequest? cell, IReadOnlyList<ValidationError> errors)
     {
-        if (request.Cell is not { OcvCurve: null, Chemistry: { } chemistry } || ChemistryPresets.For(chemistry) is not { } preset)
+        ArgumentNullException.ThrowIfNull(errors);
+        if (cell is not { OcvCurve: null, Chemistry: { } chemistry } || ChemistryPresets.For(chemistry) is not { } preset)
         {
             return errors;
         }
@@ -120,6 +121,18 @@ public static class DesignRequestMapper
         };
     }
 
+    /// <summary>
+    /// Maps a cell datasheet alone (for the cell library); returns null with the errors (keyed <c>cell.*</c>, as
+    /// Core keys them) when the chemistry is missing, a table row is incomplete or a member is unknown.
+    /// </summary>
+    public static CellInput? TryMapCell(CellRequest request, out IReadOnlyList<ValidationError> errors)
+    {
+        var e = new Collector();
+        var cell = MapCell(request, e);
+        errors = e.Errors;
+        return e.Errors.Count == 0 ? cell : null;
+    }
+
     /// <summary>The request that describes <paramref name="design"/> (every cell figure as given, margins only when set).</summary>
     public static EvaluateRequest ToRequest(DesignInput design)
     {
@@ -171,30 +184,34 @@ public static class DesignRequestMapper
         };
     }
 
-    /// <summary>The request member of a cell: every figure as given, the OCV table only when set.</summary>
-    public static CellRequest ToCellRequest(CellInput c) => new()
+    /// <summary>The request that describes a cell datasheet, every figure as given.</summary>
+    public static CellRequest ToCellRequest(CellInput c)
     {
-        Chemistry = c.Chemistry,
-        CapacityAh = c.CapacityAh,
-        NominalVoltage = c.NominalVoltage,
-        MaxChargeVoltage = c.MaxChargeVoltage,
-        MinDischargeVoltage = c.MinDischargeVoltage,
-        MaxChargeCurrentA = c.MaxChargeCurrentA,
-        MaxDischargeCurrentA = c.MaxDischargeCurrentA,
-        PeakDischargeCurrentA = c.PeakDischargeCurrentA,
-        PeakDischargeDurationS = c.PeakDischargeDurationS,
-        InternalResistanceMilliohm = c.InternalResistanceMilliohm,
-        ColdInternalResistanceMilliohm = c.ColdInternalResistanceMilliohm,
-        ColdResistanceTemperatureC = c.ColdResistanceTemperatureC,
-        MassKg = c.MassKg,
-        CapacityTolerancePercent = c.CapacityTolerancePercent,
-        ChargeTemperatureMinC = c.ChargeTemperatureMinC,
-        ChargeTemperatureMaxC = c.ChargeTemperatureMaxC,
-        DischargeTemperatureMinC = c.DischargeTemperatureMinC,
-        DischargeTemperatureMaxC = c.DischargeTemperatureMaxC,
-        TerminationCurrentA = c.TerminationCurrentA,
-        OcvCurve = c.OcvCurve?.Select(p => new OcvPointRequest { SocPercent = p.SocPercent, Voltage = p.Voltage }).ToList(),
-    };
+        ArgumentNullException.ThrowIfNull(c);
+        return new CellRequest
+        {
+            Chemistry = c.Chemistry,
+            CapacityAh = c.CapacityAh,
+            NominalVoltage = c.NominalVoltage,
+            MaxChargeVoltage = c.MaxChargeVoltage,
+            MinDischargeVoltage = c.MinDischargeVoltage,
+            MaxChargeCurrentA = c.MaxChargeCurrentA,
+            MaxDischargeCurrentA = c.MaxDischargeCurrentA,
+            PeakDischargeCurrentA = c.PeakDischargeCurrentA,
+            PeakDischargeDurationS = c.PeakDischargeDurationS,
+            InternalResistanceMilliohm = c.InternalResistanceMilliohm,
+            ColdInternalResistanceMilliohm = c.ColdInternalResistanceMilliohm,
+            ColdResistanceTemperatureC = c.ColdResistanceTemperatureC,
+            MassKg = c.MassKg,
+            CapacityTolerancePercent = c.CapacityTolerancePercent,
+            ChargeTemperatureMinC = c.ChargeTemperatureMinC,
+            ChargeTemperatureMaxC = c.ChargeTemperatureMaxC,
+            DischargeTemperatureMinC = c.DischargeTemperatureMinC,
+            DischargeTemperatureMaxC = c.DischargeTemperatureMaxC,
+            TerminationCurrentA = c.TerminationCurrentA,
+            OcvCurve = c.OcvCurve?.Select(p => new OcvPointRequest { SocPercent = p.SocPercent, Voltage = p.Voltage }).ToList(),
+        };
+    }
 
     private static CellInput? MapCell(CellRequest? c, Collector e)
     {

@@ -34,8 +34,11 @@ public sealed record EvaluateRequest : RequestObject
     public MarginsRequest? Margins { get; init; }
 }
 
-/// <summary>The cell datasheet; an omitted figure takes the chemistry preset's typical value (not for <c>custom</c>).</summary>
-public sealed record CellRequest : RequestObject
+/// <summary>
+/// The cell datasheet; an omitted figure takes the chemistry preset's typical value (not for <c>custom</c>). Not
+/// sealed: the cell library's bodies add their names to the same flat figures.
+/// </summary>
+public record CellRequest : RequestObject
 {
     public Chemistry? Chemistry { get; init; }
     public double? CapacityAh { get; init; }

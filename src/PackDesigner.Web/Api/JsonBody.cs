@@ -20,7 +20,8 @@ public static partial class JsonBody
 
     public const string BodyKey = "$";
 
-    public static async Task<JsonBodyResult<T>> ReadAsync<T>(HttpRequest request, JsonSerializerOptions options, CancellationToken ct)
+    /// <summary>Reads the body as <typeparamref name="T"/>; <paramref name="subject"/> names what the body holds in messages ("the design", "the cell").</summary>
+    public static async Task<JsonBodyResult<T>> ReadAsync<T>(HttpRequest request, JsonSerializerOptions options, CancellationToken ct, string subject = "the design")
         where T : class
     {
         var bytes = await ReadCappedAsync(request, ct);
@@ -32,13 +33,13 @@ public static partial class JsonBody
 
         if (bytes.Length == 0)
         {
-            return Fail<T>(ApiProblems.Field(BodyKey, "The request body is empty: send the design as a JSON object."));
+            return Fail<T>(ApiProblems.Field(BodyKey, $"The request body is empty: send {subject} as a JSON object."));
         }
 
         if (!request.HasJsonContentType())
         {
             return Fail<T>(ApiProblems.Status(StatusCodes.Status415UnsupportedMediaType, "Unsupported media type.",
-                "Send the design as application/json."));
+                $"Send {subject} as application/json."));
         }
 
         try
@@ -54,7 +55,7 @@ public static partial class JsonBody
         {
             var value = JsonSerializer.Deserialize<T>(bytes, options);
             return value is null
-                ? Fail<T>(ApiProblems.Field(BodyKey, "Expected a JSON object with the design."))
+                ? Fail<T>(ApiProblems.Field(BodyKey, $"Expected a JSON object with {subject}."))
                 : new JsonBodyResult<T>(value, null);
         }
         catch (JsonException ex)

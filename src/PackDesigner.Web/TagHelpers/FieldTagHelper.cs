@@ -9,9 +9,10 @@ namespace PackDesigner.Web.TagHelpers;
 /// <summary>
 /// One form field with its label, unit, hint and error messages:
 /// <c>&lt;pd-field asp-for="Input.Cell.CapacityAh" unit="Ah" hint="…" /&gt;</c>. The control is a text input, or
-/// with <c>kind</c> a checkbox, a select (options from <c>items</c>, grouped by their <c>Group</c>) or a textarea. The control is described by
-/// its hint and error, marked invalid when it has errors, and shows the text as typed. Errors come from model
-/// state; the error element carries <c>data-testid="error-{api path}"</c>.
+/// with <c>kind</c> a checkbox, a select (options from <c>items</c>), a textarea, a line of free text
+/// (<c>string</c>, or <c>plain</c> with spell-checking) or free-text notes (<c>notes</c>). The control is described by its hint and error, marked
+/// invalid when it has errors, and shows the text as typed. Errors come from model state; the error element
+/// carries <c>data-testid="error-{api path}"</c>, the path given by <c>path</c> or found by <see cref="FormFieldPaths"/>.
 /// </summary>
 [HtmlTargetElement("pd-field", Attributes = "asp-for")]
 public sealed class FieldTagHelper : TagHelper
@@ -25,8 +26,14 @@ public sealed class FieldTagHelper : TagHelper
 
     public string? Placeholder { get; set; }
 
-    /// <summary>"text" (default, a number), "integer", "plain" (free text such as a name), "checkbox", "select" or "textarea".</summary>
+    /// <summary>"text" (default, a number), "integer", "checkbox", "select", "textarea", "string" or "plain" (free text) or "notes".</summary>
     public string Kind { get; set; } = "text";
+
+    /// <summary>The field's API path for the test ids, when <see cref="FormFieldPaths"/> does not know the field.</summary>
+    public string? Path { get; set; }
+
+    /// <summary>The most characters a free-text field takes (its <c>maxlength</c>).</summary>
+    public int? MaxLength { get; set; }
 
     /// <summary>The options of a select.</summary>
     public IEnumerable<SelectListItem> Items { get; set; } = [];
@@ -42,7 +49,7 @@ public sealed class FieldTagHelper : TagHelper
     {
         var name = ViewContext.ViewData.TemplateInfo.GetFullHtmlFieldName(For.Name);
         var id = TagBuilder.CreateSanitizedId(name, "_");
-        var apiPath = FormFieldPaths.ForFormKey(name)?.ApiPath ?? name;
+        var apiPath = Path ?? FormFieldPaths.ForFormKey(name)?.ApiPath ?? name;
         var errors = ViewContext.ModelState.TryGetValue(name, out var entry)
             ? entry.Errors.Select(e => e.ErrorMessage).ToList()
             : [];
@@ -110,7 +117,7 @@ public sealed class FieldTagHelper : TagHelper
         var tag = Kind switch
         {
             "select" => "select",
-            "textarea" => "textarea",
+            "textarea" or "notes" => "textarea",
             _ => "input",
         };
         var control = new TagBuilder(tag);
@@ -184,6 +191,19 @@ public sealed class FieldTagHelper : TagHelper
                 control.InnerHtml.AppendHtml("\n");
                 control.InnerHtml.Append(text);
                 return control;
+            case "notes":
+                control.Attributes["rows"] = Rows.ToString(System.Globalization.CultureInfo.InvariantCulture);
+                SetMaxLength(control);
+                control.InnerHtml.AppendHtml("\n");
+                control.InnerHtml.Append(text);
+                return control;
+            case "string":
+                control.TagRenderMode = TagRenderMode.SelfClosing;
+                control.Attributes["type"] = "text";
+                control.Attributes["value"] = text;
+                SetMaxLength(control);
+                SetPlaceholder(control);
+                return control;
             default:
                 control.TagRenderMode = TagRenderMode.SelfClosing;
                 control.Attributes["type"] = "text";
@@ -197,6 +217,14 @@ public sealed class FieldTagHelper : TagHelper
                 control.Attributes["value"] = text;
                 SetPlaceholder(control);
                 return control;
+        }
+    }
+
+    private void SetMaxLength(TagBuilder control)
+    {
+        if (MaxLength is { } max)
+        {
+            control.Attributes["maxlength"] = max.ToString(System.Globalization.CultureInfo.InvariantCulture);
         }
     }
 

@@ -202,4 +202,28 @@ public abstract class CellLibraryTests<TDatabase>(TDatabase database) : IClassFi
         Assert.Equal(StoreStatus.Ok, deleted.Status);
         Assert.Equal(StoreStatus.NotFound, (await cells.GetAsync(cell.Id)).Status);
     }
+
+    [ProviderFact]
+    public async Task CountLinkedDesigns_TwoDesigns_CountsThemAndDeleteKeepsTheirFigures()
+    {
+        await using var db = database.CreateContext();
+        var cells = database.Cells(db);
+        var designs = database.Designs(db);
+        var cell = (await cells.CreateAsync(new CellData("Linked " + Guid.NewGuid(), TestDesigns.Valid().Cell))).Value!;
+        var unused = (await cells.CreateAsync(new CellData("Unused " + Guid.NewGuid(), TestDesigns.Valid().Cell))).Value!;
+        var first = (await designs.CreateDesignAsync("Uses cell A " + Guid.NewGuid(), null, null, cell.Id, TestDesigns.Valid(), "a")).Value!;
+        await designs.CreateDesignAsync("Uses cell B " + Guid.NewGuid(), null, null, cell.Id, TestDesigns.Valid(), "a");
+
+        var linked = await cells.CountLinkedDesignsAsync(cell.Id);
+        var none = await cells.CountLinkedDesignsAsync(unused.Id);
+        var missing = await cells.CountLinkedDesignsAsync(int.MaxValue);
+        await cells.DeleteAsync(cell.Id, cell.Version);
+        var after = (await designs.GetDesignAsync(first.Id)).Value!;
+
+        Assert.Equal(2, linked.Value);
+        Assert.Equal(0, none.Value);
+        Assert.Equal(StoreStatus.NotFound, missing.Status);
+        Assert.Null(after.CellId);
+        Assert.Equal(TestDesigns.Valid().Cell.CapacityAh, after.LatestRevision.Input.Cell.CapacityAh);
+    }
 }

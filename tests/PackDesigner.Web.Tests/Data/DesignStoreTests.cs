@@ -538,4 +538,30 @@ public abstract class DesignStoreTests<TDatabase>(TDatabase database) : IClassFi
         Assert.Equal("Tractor", implied.Value.JobTitle);
         Assert.Equal(1, implied.Value.LatestRevisionNumber);
     }
+
+    [ProviderFact]
+    public async Task ListCustomerDesigns_OtherCustomersAndUnowned_AreLeftOut()
+    {
+        var token = "own" + Guid.NewGuid().ToString("N")[..8];
+        await using var db = Database.CreateContext();
+        var customers = Database.Customers(db);
+        var store = Database.Designs(db);
+        var mine = (await customers.CreateAsync(new CustomerData("Mine " + token))).Value!;
+        var other = (await customers.CreateAsync(new CustomerData("Other " + token))).Value!;
+        var job = (await customers.CreateJobAsync(mine.Id, new JobData("Boat " + token))).Value!;
+        await store.CreateDesignAsync($"{token} direct", mine.Id, null, null, TestDesigns.Valid(), "a");
+        await store.CreateDesignAsync($"{token} by job", null, job.Id, null, TestDesigns.Valid(), "a");
+        await store.CreateDesignAsync($"{token} other", other.Id, null, null, TestDesigns.Valid(), "a");
+        await store.CreateDesignAsync($"{token} nobody", null, null, null, TestDesigns.Valid(), "a");
+
+        var page1 = await store.ListCustomerDesignsAsync(mine.Id, DesignSort.NameAscending, 1, 1);
+        var page2 = await store.ListCustomerDesignsAsync(mine.Id, DesignSort.NameAscending, 2, 1);
+        var missing = await store.ListCustomerDesignsAsync(int.MaxValue, DesignSort.NameAscending, 1, 10);
+
+        Assert.Equal(2, page1.Value!.TotalCount);
+        Assert.Equal([$"{token} by job"], page1.Value.Items.Select(r => r.Name));
+        Assert.Equal([$"{token} direct"], page2.Value!.Items.Select(r => r.Name));
+        Assert.Equal(job.Title, page1.Value.Items[0].JobTitle);
+        Assert.Equal(StoreStatus.NotFound, missing.Status);
+    }
 }

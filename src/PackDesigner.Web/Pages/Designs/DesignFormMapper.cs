@@ -51,6 +51,18 @@ public static class DesignFormMapper
     /// <summary>The form showing a saved Core input.</summary>
     public static DesignForm FromInput(DesignInput input) => FromRequest(DesignRequestMapper.ToRequest(input));
 
+    /// <summary>
+    /// Parses the figures of a cell form (invariant culture, blank = null) without its OCV table; parse errors are
+    /// keyed by API path (<c>cell.capacityAh</c>).
+    /// </summary>
+    public static CellRequest ParseCell(CellForm form, out IReadOnlyList<ValidationError> errors)
+    {
+        var parser = new Parser();
+        var request = parser.ParseCell(form, withTable: false);
+        errors = parser.Errors;
+        return request;
+    }
+
     /// <summary>The form showing <paramref name="request"/>; margins left out of the request show their defaults.</summary>
     public static DesignForm FromRequest(EvaluateRequest request)
     {
@@ -58,7 +70,7 @@ public static class DesignFormMapper
         var d = new MarginsInput();
         return new DesignForm
         {
-            Cell = CellFromRequest(request.Cell ?? new CellRequest()),
+            Cell = FromCellRequest(request.Cell ?? new CellRequest()),
             Series = Numbers.ForInput(request.Series),
             Parallel = Numbers.ForInput(request.Parallel),
             LinkResistanceMilliohm = Numbers.ForInput(request.LinkResistanceMilliohm),
@@ -115,31 +127,35 @@ public static class DesignFormMapper
         };
     }
 
-    /// <summary>The cell section of the form showing <paramref name="c"/> (for example a library cell's figures).</summary>
-    public static CellForm CellFromRequest(CellRequest c) => new()
+    /// <summary>The cell part of the form showing <paramref name="c"/>.</summary>
+    public static CellForm FromCellRequest(CellRequest c)
     {
-        Chemistry = Name(c.Chemistry),
-        CapacityAh = Numbers.ForInput(c.CapacityAh),
-        NominalVoltage = Numbers.ForInput(c.NominalVoltage),
-        MaxChargeVoltage = Numbers.ForInput(c.MaxChargeVoltage),
-        MinDischargeVoltage = Numbers.ForInput(c.MinDischargeVoltage),
-        MaxChargeCurrentA = Numbers.ForInput(c.MaxChargeCurrentA),
-        MaxDischargeCurrentA = Numbers.ForInput(c.MaxDischargeCurrentA),
-        PeakDischargeCurrentA = Numbers.ForInput(c.PeakDischargeCurrentA),
-        PeakDischargeDurationS = Numbers.ForInput(c.PeakDischargeDurationS),
-        InternalResistanceMilliohm = Numbers.ForInput(c.InternalResistanceMilliohm),
-        ColdInternalResistanceMilliohm = Numbers.ForInput(c.ColdInternalResistanceMilliohm),
-        ColdResistanceTemperatureC = Numbers.ForInput(c.ColdResistanceTemperatureC),
-        MassKg = Numbers.ForInput(c.MassKg),
-        CapacityTolerancePercent = Numbers.ForInput(c.CapacityTolerancePercent),
-        ChargeTemperatureMinC = Numbers.ForInput(c.ChargeTemperatureMinC),
-        ChargeTemperatureMaxC = Numbers.ForInput(c.ChargeTemperatureMaxC),
-        DischargeTemperatureMinC = Numbers.ForInput(c.DischargeTemperatureMinC),
-        DischargeTemperatureMaxC = Numbers.ForInput(c.DischargeTemperatureMaxC),
-        TerminationCurrentA = Numbers.ForInput(c.TerminationCurrentA),
-        OcvTable = c.OcvCurve is null ? null : string.Join('\n',
-            c.OcvCurve.Select(p => $"{Numbers.ForInput(p?.SocPercent)},{Numbers.ForInput(p?.Voltage)}")),
-    };
+        ArgumentNullException.ThrowIfNull(c);
+        return new CellForm
+        {
+            Chemistry = Name(c.Chemistry),
+            CapacityAh = Numbers.ForInput(c.CapacityAh),
+            NominalVoltage = Numbers.ForInput(c.NominalVoltage),
+            MaxChargeVoltage = Numbers.ForInput(c.MaxChargeVoltage),
+            MinDischargeVoltage = Numbers.ForInput(c.MinDischargeVoltage),
+            MaxChargeCurrentA = Numbers.ForInput(c.MaxChargeCurrentA),
+            MaxDischargeCurrentA = Numbers.ForInput(c.MaxDischargeCurrentA),
+            PeakDischargeCurrentA = Numbers.ForInput(c.PeakDischargeCurrentA),
+            PeakDischargeDurationS = Numbers.ForInput(c.PeakDischargeDurationS),
+            InternalResistanceMilliohm = Numbers.ForInput(c.InternalResistanceMilliohm),
+            ColdInternalResistanceMilliohm = Numbers.ForInput(c.ColdInternalResistanceMilliohm),
+            ColdResistanceTemperatureC = Numbers.ForInput(c.ColdResistanceTemperatureC),
+            MassKg = Numbers.ForInput(c.MassKg),
+            CapacityTolerancePercent = Numbers.ForInput(c.CapacityTolerancePercent),
+            ChargeTemperatureMinC = Numbers.ForInput(c.ChargeTemperatureMinC),
+            ChargeTemperatureMaxC = Numbers.ForInput(c.ChargeTemperatureMaxC),
+            DischargeTemperatureMinC = Numbers.ForInput(c.DischargeTemperatureMinC),
+            DischargeTemperatureMaxC = Numbers.ForInput(c.DischargeTemperatureMaxC),
+            TerminationCurrentA = Numbers.ForInput(c.TerminationCurrentA),
+            OcvTable = c.OcvCurve is null ? null : string.Join('\n',
+                c.OcvCurve.Select(p => $"{Numbers.ForInput(p?.SocPercent)},{Numbers.ForInput(p?.Voltage)}")),
+        };
+    }
 
     private static bool IsOcv(string field) => field.StartsWith(FormFieldPaths.OcvApiPath, StringComparison.Ordinal);
 
@@ -158,29 +174,7 @@ public static class DesignFormMapper
 
         public EvaluateRequest ToRequest(DesignForm f) => new()
         {
-            Cell = new CellRequest
-            {
-                Chemistry = Choice<Chemistry>("cell.chemistry", f.Cell.Chemistry, ChemistryNames),
-                CapacityAh = Number("cell.capacityAh", f.Cell.CapacityAh),
-                NominalVoltage = Number("cell.nominalVoltage", f.Cell.NominalVoltage),
-                MaxChargeVoltage = Number("cell.maxChargeVoltage", f.Cell.MaxChargeVoltage),
-                MinDischargeVoltage = Number("cell.minDischargeVoltage", f.Cell.MinDischargeVoltage),
-                MaxChargeCurrentA = Number("cell.maxChargeCurrentA", f.Cell.MaxChargeCurrentA),
-                MaxDischargeCurrentA = Number("cell.maxDischargeCurrentA", f.Cell.MaxDischargeCurrentA),
-                PeakDischargeCurrentA = Number("cell.peakDischargeCurrentA", f.Cell.PeakDischargeCurrentA),
-                PeakDischargeDurationS = Number("cell.peakDischargeDurationS", f.Cell.PeakDischargeDurationS),
-                InternalResistanceMilliohm = Number("cell.internalResistanceMilliohm", f.Cell.InternalResistanceMilliohm),
-                ColdInternalResistanceMilliohm = Number("cell.coldInternalResistanceMilliohm", f.Cell.ColdInternalResistanceMilliohm),
-                ColdResistanceTemperatureC = Number("cell.coldResistanceTemperatureC", f.Cell.ColdResistanceTemperatureC),
-                MassKg = Number("cell.massKg", f.Cell.MassKg),
-                CapacityTolerancePercent = Number("cell.capacityTolerancePercent", f.Cell.CapacityTolerancePercent),
-                ChargeTemperatureMinC = Number("cell.chargeTemperatureMinC", f.Cell.ChargeTemperatureMinC),
-                ChargeTemperatureMaxC = Number("cell.chargeTemperatureMaxC", f.Cell.ChargeTemperatureMaxC),
-                DischargeTemperatureMinC = Number("cell.dischargeTemperatureMinC", f.Cell.DischargeTemperatureMinC),
-                DischargeTemperatureMaxC = Number("cell.dischargeTemperatureMaxC", f.Cell.DischargeTemperatureMaxC),
-                TerminationCurrentA = Number("cell.terminationCurrentA", f.Cell.TerminationCurrentA),
-                OcvCurve = Table(f.Cell.OcvTable),
-            },
+            Cell = ParseCell(f.Cell, withTable: true),
             Series = Integer("series", f.Series),
             Parallel = Integer("parallel", f.Parallel),
             LinkResistanceMilliohm = Number("linkResistanceMilliohm", f.LinkResistanceMilliohm),
@@ -234,6 +228,31 @@ public static class DesignFormMapper
                 ChargeOverCurrentDelayS = Number("margins.chargeOverCurrentDelayS", f.Margins.ChargeOverCurrentDelayS),
                 ShortCircuitDelayMicroseconds = Number("margins.shortCircuitDelayMicroseconds", f.Margins.ShortCircuitDelayMicroseconds),
             },
+        };
+
+        /// <summary>The cell's figures; the OCV table only when <paramref name="withTable"/> (the cell pages read it as CSV).</summary>
+        public CellRequest ParseCell(CellForm c, bool withTable) => new()
+        {
+            Chemistry = Choice<Chemistry>("cell.chemistry", c.Chemistry, ChemistryNames),
+            CapacityAh = Number("cell.capacityAh", c.CapacityAh),
+            NominalVoltage = Number("cell.nominalVoltage", c.NominalVoltage),
+            MaxChargeVoltage = Number("cell.maxChargeVoltage", c.MaxChargeVoltage),
+            MinDischargeVoltage = Number("cell.minDischargeVoltage", c.MinDischargeVoltage),
+            MaxChargeCurrentA = Number("cell.maxChargeCurrentA", c.MaxChargeCurrentA),
+            MaxDischargeCurrentA = Number("cell.maxDischargeCurrentA", c.MaxDischargeCurrentA),
+            PeakDischargeCurrentA = Number("cell.peakDischargeCurrentA", c.PeakDischargeCurrentA),
+            PeakDischargeDurationS = Number("cell.peakDischargeDurationS", c.PeakDischargeDurationS),
+            InternalResistanceMilliohm = Number("cell.internalResistanceMilliohm", c.InternalResistanceMilliohm),
+            ColdInternalResistanceMilliohm = Number("cell.coldInternalResistanceMilliohm", c.ColdInternalResistanceMilliohm),
+            ColdResistanceTemperatureC = Number("cell.coldResistanceTemperatureC", c.ColdResistanceTemperatureC),
+            MassKg = Number("cell.massKg", c.MassKg),
+            CapacityTolerancePercent = Number("cell.capacityTolerancePercent", c.CapacityTolerancePercent),
+            ChargeTemperatureMinC = Number("cell.chargeTemperatureMinC", c.ChargeTemperatureMinC),
+            ChargeTemperatureMaxC = Number("cell.chargeTemperatureMaxC", c.ChargeTemperatureMaxC),
+            DischargeTemperatureMinC = Number("cell.dischargeTemperatureMinC", c.DischargeTemperatureMinC),
+            DischargeTemperatureMaxC = Number("cell.dischargeTemperatureMaxC", c.DischargeTemperatureMaxC),
+            TerminationCurrentA = Number("cell.terminationCurrentA", c.TerminationCurrentA),
+            OcvCurve = withTable ? Table(c.OcvTable) : null,
         };
 
         private void Add(string field, string message) => Errors.Add(new ValidationError(field, message));

@@ -115,7 +115,7 @@ public sealed class EditorModel(DesignStore store, CellLibrary cells, DesignLink
         }
 
         FormErrors.Clear(ModelState, FormFieldPaths.Prefix + ".Cell.");
-        Input.Cell = DesignFormMapper.CellFromRequest(DesignRequestMapper.ToCellRequest(cell.Value!.Figures));
+        Input.Cell = DesignFormMapper.FromCellRequest(DesignRequestMapper.ToCellRequest(cell.Value!.Figures));
         Notice = $"The cell section now holds the figures of library cell “{cell.Value.Name}”. They are saved with the next revision.";
         return await ShowAsync(ct);
     }

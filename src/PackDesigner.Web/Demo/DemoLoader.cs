@@ -57,7 +57,7 @@ public sealed class DemoLoader(CustomerService customers, CellLibrary cells, Des
             }
 
             var (customerId, jobId) = customerIds[d.CustomerName];
-            var design = Expect(await designs.CreateDesignAsync(d.Name, customerId, jobId, cellIds[d.CellName], d.First, CreatedBy, ct), d.Name);
+            var design = Expect(await designs.CreateDesignAsync(d.Name, customerId, jobId, cellIds[d.CellName], d.First, CreatedBy, ct: ct), d.Name);
             foreach (var r in d.Later)
             {
                 design = Expect(await designs.SaveRevisionAsync(design.Id, design.LatestRevisionNumber, r.Input, CreatedBy, note: r.Note, ct: ct), d.Name);

@@ -2,11 +2,9 @@ using Microsoft.Playwright;
 
 namespace PackDesigner.Browser.Tests.Pages;
 
-// ADAPT AFTER MERGE: the design pages come from the `designs` branch. These page objects follow the routes and
-// test ids agreed for it (/designs/new with the / form's input names plus Name, data-testid="save-design",
-// /designs/{id} with data-testid="revision-row", /designs/{id}/compare?a=&b= with data-testid="compare-table").
-// The edit route (/designs/{id}/edit) and the customer/cell selects (a <select> whose name ends in CustomerId or
-// CellId) are assumptions; check them against the merged pages.
+// The design pages: /designs/new and /designs/{id}/edit (fields Design.Name, Design.Owner, Design.CellId and the
+// design form's Input.* fields; save button data-testid="save"), /designs/{id} with data-testid="revision-row",
+// /designs/{id}/compare?a=&b= with the changed inputs in data-testid="compare-inputs".
 
 /// <summary>The design form of <c>/designs/new</c> and <c>/designs/{id}/edit</c>.</summary>
 public sealed class DesignFormPage(IPage page) : PageObject(page)
@@ -23,22 +21,17 @@ public sealed class DesignFormPage(IPage page) : PageObject(page)
         return this;
     }
 
-    public Task SetNameAsync(string name) => FillAsync("Name", name);
+    public Task SetNameAsync(string name) => FillAsync("Design.Name", name);
 
-    /// <summary>Chooses an option by its visible text in the first select whose name ends with <paramref name="nameEnding"/>, when the form has one.</summary>
-    public async Task<bool> TryChooseAsync(string nameEnding, string optionText)
+    /// <summary>Chooses the first option of the select <paramref name="name"/> whose visible text contains <paramref name="optionText"/>.</summary>
+    public async Task ChooseAsync(string name, string optionText)
     {
-        var select = Page.Locator($"select[name$='{nameEnding}']").First;
-        if (await select.CountAsync() == 0)
-        {
-            return false;
-        }
-
-        await select.SelectOptionAsync(new SelectOptionValue { Label = optionText });
-        return true;
+        var select = Page.Locator($"select[name='{name}']");
+        var value = await select.Locator("option", new() { HasTextString = optionText }).First.GetAttributeAsync("value");
+        await select.SelectOptionAsync(value ?? string.Empty);
     }
 
-    public Task SaveAsync() => SubmitAsync("save-design");
+    public Task SaveAsync() => SubmitAsync("save");
 }
 
 /// <summary>A design's page (<c>/designs/{id}</c>) with its revision history.</summary>
@@ -58,5 +51,5 @@ public sealed class DesignComparePage(IPage page) : PageObject(page)
         return this;
     }
 
-    public ILocator Table => ByTestId("compare-table");
+    public ILocator Table => ByTestId("compare-inputs");
 }

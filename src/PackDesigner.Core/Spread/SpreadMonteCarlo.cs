@@ -196,43 +196,46 @@ public static class SpreadMonteCarlo
     /// <summary>Largest number of tripping packs the risk allows among <paramref name="trials"/>.</summary>
     private static long AllowedCount(double risk, long trials) => (long)Math.Floor(risk * trials + 1e-9);
 
+    /// <summary>
+    /// Runs the trials on a fixed number of workers (one per thread, each with one evaluator and one accumulator) that
+    /// take chunks of trials from a shared counter, so the memory allocated does not grow with the number of trials.
+    /// Which worker runs a chunk does not matter: each trial has its own generator stream and the accumulators merge
+    /// by adding counts.
+    /// </summary>
     private static SpreadAccumulator Run(SpreadSetup setup, double cv, bool withTripVoltage, SpreadRunOptions options, CancellationToken ct)
     {
         var trials = setup.Trials;
         var chunks = (trials + SpreadLimits.ChunkSize - 1) / SpreadLimits.ChunkSize;
-        var merged = new SpreadAccumulator(setup, withTripVoltage);
-        var parallel = new ParallelOptions
+        var workers = Math.Clamp(options.MaxDegreeOfParallelism ?? Environment.ProcessorCount, 1, chunks);
+        var accumulators = new SpreadAccumulator[workers];
+        var next = -1;
+        Parallel.For(0, workers, new ParallelOptions { CancellationToken = ct, MaxDegreeOfParallelism = workers }, w =>
         {
-            CancellationToken = ct,
-            MaxDegreeOfParallelism = options.MaxDegreeOfParallelism ?? Environment.ProcessorCount,
-        };
-        Parallel.For(
-            0,
-            chunks,
-            parallel,
-            () => (Evaluator: new TrialEvaluator(setup), Acc: new SpreadAccumulator(setup, withTripVoltage)),
-            (chunk, _, w) =>
+            var evaluator = new TrialEvaluator(setup);
+            var acc = new SpreadAccumulator(setup, withTripVoltage);
+            int chunk;
+            while ((chunk = Interlocked.Increment(ref next)) < chunks)
             {
                 ct.ThrowIfCancellationRequested();
                 var from = chunk * SpreadLimits.ChunkSize;
                 var to = Math.Min(trials, from + SpreadLimits.ChunkSize);
                 for (var t = from; t < to; t++)
                 {
-                    w.Evaluator.Draw(t);
-                    var o = w.Evaluator.Evaluate(cv, withTripVoltage);
-                    w.Acc.Add(t, o, setup.S);
+                    evaluator.Draw(t);
+                    var o = evaluator.Evaluate(cv, withTripVoltage);
+                    acc.Add(t, o, setup.S);
                 }
+            }
 
-                return w;
-            },
-            w =>
-            {
-                lock (merged)
-                {
-                    merged.Merge(w.Acc);
-                }
-            });
+            accumulators[w] = acc;
+        });
         ct.ThrowIfCancellationRequested();
+        var merged = accumulators[0];
+        for (var w = 1; w < workers; w++)
+        {
+            merged.Merge(accumulators[w]);
+        }
+
         return merged;
     }
 

@@ -1,1 +1,9 @@
-﻿Console.WriteLine("Hello, World!");
+using BenchmarkDotNet.Running;
+
+if (args is ["cpu-time"])
+{
+    PackDesigner.Benchmarks.CpuTime.Run();
+    return;
+}
+
+BenchmarkSwitcher.FromAssembly(typeof(PackDesigner.Benchmarks.SpreadBenchmarks).Assembly).Run(args);

@@ -17,6 +17,9 @@ public static class DesignRoutes
 
     public static string View(int id, int revision) => I($"/designs/{id}?revision={revision}");
 
+    /// <summary>The cell-to-cell spread analysis of the design's latest revision.</summary>
+    public static string Spread(int id) => I($"/designs/{id}/spread");
+
     public static string Edit(int id) => I($"/designs/{id}/edit");
 
     public static string Compare(int id, int a, int b) => I($"/designs/{id}/compare?a={a}&b={b}");

@@ -185,8 +185,8 @@ public class ConfigurationFinderTests
     {
         var cell = CellResolver.TryResolve(design.Cell, out _)!;
         var ctx = PackContext.Create(design, cell);
-        var (cellT, _) = Protection.ThresholdCalculator.Compute(ctx);
-        return Charging.ChargeSetpointCalculator.Compute(ctx, cellT).UnroundedConstantVoltage;
+        var (cellT, _) = global::PackDesigner.Core.Protection.ThresholdCalculator.Compute(ctx);
+        return global::PackDesigner.Core.Charging.ChargeSetpointCalculator.Compute(ctx, cellT).UnroundedConstantVoltage;
     }
 
     /// <summary>Share of ∫₀¹ V dSOC between two table rows of the LFP preset, by trapezoids on its rows.</summary>

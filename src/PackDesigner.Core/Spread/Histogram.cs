@@ -107,6 +107,35 @@ internal sealed class Histogram
         return Bins;
     }
 
+    /// <summary>
+    /// The counts regrouped into <paramref name="bins"/> equal bins over [min, max] for drawing: each fine bin goes
+    /// to the coarse bin holding its centre (kept inside [min, max]); values below or above the fine range go to the
+    /// first or last bin, where the exact minimum and maximum lie.
+    /// </summary>
+    public SpreadHistogram Coarse(int bins)
+    {
+        if (Count == 0)
+        {
+            return new SpreadHistogram(0, 0, []);
+        }
+
+        var width = Max > Min ? (Max - Min) / bins : 0;
+        var n = width > 0 ? bins : 1;
+        var counts = new long[n];
+        int Index(double value) => width > 0 ? Math.Clamp((int)((value - Min) / width), 0, n - 1) : 0;
+        counts[0] += _under;
+        counts[n - 1] += _over;
+        for (var i = 0; i < Bins; i++)
+        {
+            if (_counts[i] != 0)
+            {
+                counts[Index(Math.Clamp(Low + (i + 0.5) * Width, Min, Max))] += _counts[i];
+            }
+        }
+
+        return new SpreadHistogram(Min, width, counts);
+    }
+
     /// <summary>Empirical quantile: the bin holding the ⌈q·N⌉-th smallest value, as its centre kept inside [min, max].</summary>
     public double Quantile(double q) => ValueAtRank(RankOf(q), 0.5);
 

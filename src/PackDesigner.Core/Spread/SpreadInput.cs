@@ -88,6 +88,9 @@ public static class SpreadLimits
     /// <summary>Width of a cell-voltage histogram bin: the percentile resolution of every cell voltage, V.</summary>
     public const double VoltageResolutionV = 1e-4;
 
+    /// <summary>Bins of the histograms a result carries for drawing.</summary>
+    public const int ChartBins = 40;
+
     /// <summary>Bins of the capacity, energy and state-of-charge histograms.</summary>
     public const int FineBins = 20_000;
 }

@@ -6,6 +6,12 @@ namespace PackDesigner.Core.Spread;
 /// <summary>A closed interval, in the unit of the figure it belongs to.</summary>
 public sealed record SpreadInterval(double Low, double High);
 
+/// <summary>
+/// Counts of one figure over the trials in equal bins from <see cref="Low"/> (the exact minimum), each
+/// <see cref="BinWidth"/> wide, for drawing; a width of 0 means every trial gave the same value.
+/// </summary>
+public sealed record SpreadHistogram(double Low, double BinWidth, IReadOnlyList<long> Counts);
+
 /// <summary>95 % confidence intervals of the four percentiles (distribution-free, from order statistics).</summary>
 public sealed record SpreadPercentileConfidence(SpreadInterval P5, SpreadInterval P50, SpreadInterval P95, SpreadInterval P999);
 
@@ -56,6 +62,9 @@ public record SpreadMetrics
 
     /// <summary>The highest group voltage at the end of charge (termination current flowing), V.</summary>
     public required SpreadPercentiles HighestCellVoltageAtEndOfCharge { get; init; }
+
+    /// <summary>The highest group voltage at the end of charge in <see cref="SpreadLimits.ChartBins"/> bins, V; null where not kept.</summary>
+    public SpreadHistogram? HighestCellVoltageHistogram { get; init; }
 
     /// <summary>The lowest group voltage under the peak current, coldest ambient, when the pack sags to the controller's cut-off, V.</summary>
     public required SpreadPercentiles LowestCellVoltageAtCutoff { get; init; }

@@ -29,6 +29,7 @@ public static class ApiEndpoints
             .WithTags("Evaluate")
             .WithSummary("The chemistry presets and the sources of their typical figures.")
             .WithMetadata(StorageFreeAttribute.Instance);
+        app.MapSpreadEndpoints();
         app.MapCellEndpoints();
         app.MapCustomerEndpoints();
         return app;

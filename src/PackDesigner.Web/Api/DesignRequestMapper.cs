@@ -13,7 +13,7 @@ namespace PackDesigner.Web.Api;
 /// unknown members are reported as <see cref="ValidationError"/>s keyed by their camelCase field path, the same
 /// keys Core uses, so pages and API show every problem in one list.
 /// </summary>
-public static class DesignRequestMapper
+public static partial class DesignRequestMapper
 {
     public const string RequiredMessage = "Required.";
     public const string UnknownMessage = "Unknown field: check its spelling against the API contract.";
@@ -79,21 +79,8 @@ public static class DesignRequestMapper
         var window = e.Object("socWindow", request.SocWindow, w => new SocWindowInput(
             e.Need("socWindow.minPercent", w.MinPercent),
             e.Need("socWindow.maxPercent", w.MaxPercent)));
-        var controller = e.Object("controller", request.Controller, c => new ControllerInput(
-            e.Need("controller.minVoltage", c.MinVoltage),
-            e.Need("controller.maxVoltage", c.MaxVoltage),
-            e.Need("controller.continuousCurrentA", c.ContinuousCurrentA),
-            e.Need("controller.peakCurrentA", c.PeakCurrentA),
-            e.Need("controller.peakDurationS", c.PeakDurationS),
-            e.Need("controller.regenCurrentA", c.RegenCurrentA),
-            e.Need("controller.dcLinkCapacitanceMicrofarad", c.DcLinkCapacitanceMicrofarad),
-            e.Need("controller.prechargeTimeS", c.PrechargeTimeS)));
-        var charger = e.Object("charger", request.Charger, c => new ChargerInput(
-            e.Need("charger.maxVoltage", c.MaxVoltage),
-            e.Need("charger.maxCurrentA", c.MaxCurrentA),
-            e.Need("charger.voltageStepV", c.VoltageStepV),
-            e.Need("charger.floatStage", c.FloatStage),
-            c.TargetCellVoltage));
+        var controller = e.Object("controller", request.Controller, c => MapController(c, e));
+        var charger = e.Object("charger", request.Charger, c => MapCharger(c, e));
         var ambient = e.Object("ambient", request.Ambient, a => new AmbientInput(
             e.Need("ambient.minC", a.MinC),
             e.Need("ambient.maxC", a.MaxC)));
@@ -266,6 +253,23 @@ public static class DesignRequestMapper
 
         return points;
     }
+
+    private static ControllerInput MapController(ControllerRequest c, Collector e) => new(
+        e.Need("controller.minVoltage", c.MinVoltage),
+        e.Need("controller.maxVoltage", c.MaxVoltage),
+        e.Need("controller.continuousCurrentA", c.ContinuousCurrentA),
+        e.Need("controller.peakCurrentA", c.PeakCurrentA),
+        e.Need("controller.peakDurationS", c.PeakDurationS),
+        e.Need("controller.regenCurrentA", c.RegenCurrentA),
+        e.Need("controller.dcLinkCapacitanceMicrofarad", c.DcLinkCapacitanceMicrofarad),
+        e.Need("controller.prechargeTimeS", c.PrechargeTimeS));
+
+    private static ChargerInput MapCharger(ChargerRequest c, Collector e) => new(
+        e.Need("charger.maxVoltage", c.MaxVoltage),
+        e.Need("charger.maxCurrentA", c.MaxCurrentA),
+        e.Need("charger.voltageStepV", c.VoltageStepV),
+        e.Need("charger.floatStage", c.FloatStage),
+        c.TargetCellVoltage);
 
     private static MarginsInput MapMargins(MarginsRequest m)
     {

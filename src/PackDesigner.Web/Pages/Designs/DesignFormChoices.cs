@@ -21,4 +21,10 @@ public static class DesignFormChoices
         new("Bottom (at empty)", "bottom"),
         new("Top (at full)", "top"),
     ];
+
+    public static IReadOnlyList<SelectListItem> SpreadDistributions { get; } =
+    [
+        new("Normal", "normal"),
+        new("Uniform", "uniform"),
+    ];
 }

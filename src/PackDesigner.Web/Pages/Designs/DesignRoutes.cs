@@ -17,6 +17,12 @@ public static class DesignRoutes
 
     public static string View(int id, int revision) => I($"/designs/{id}?revision={revision}");
 
+    /// <summary>The cell-to-cell spread analysis of the design's latest revision.</summary>
+    public static string Spread(int id) => I($"/designs/{id}/spread");
+
+    /// <summary>The editor for a new design with the series and parallel counts filled in (from the finder).</summary>
+    public static string NewWith(int series, int parallel) => I($"/designs/new?series={series}&parallel={parallel}");
+
     public static string Edit(int id) => I($"/designs/{id}/edit");
 
     public static string Compare(int id, int a, int b) => I($"/designs/{id}/compare?a={a}&b={b}");

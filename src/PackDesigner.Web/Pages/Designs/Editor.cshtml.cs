@@ -8,6 +8,7 @@ using PackDesigner.Data.Designs;
 using PackDesigner.Data.Results;
 using PackDesigner.Data.Storage;
 using PackDesigner.Web.Api;
+using PackDesigner.Web.Formatting;
 
 namespace PackDesigner.Web.Pages.Designs;
 
@@ -49,7 +50,7 @@ public sealed class EditorModel(DesignStore store, CellLibrary cells, DesignLink
 
     public string Title => Id is null ? "New design" : Current is { } c ? $"Edit “{c.Name}”" : "Edit design";
 
-    public async Task<IActionResult> OnGetAsync(int? id, int? from, int? revision, CancellationToken ct)
+    public async Task<IActionResult> OnGetAsync(int? id, int? from, int? revision, int? series, int? parallel, CancellationToken ct)
     {
         Id = id;
         if (id is { } designId)
@@ -79,6 +80,13 @@ public sealed class EditorModel(DesignStore store, CellLibrary cells, DesignLink
         else
         {
             Input = EvaluateModel.DemoForm();
+        }
+
+        if (id is null)
+        {
+            // A new design opened from the finder: ?series=&parallel= replace those two counts only.
+            Input.Series = series is { } s ? Numbers.ForInput(s) : Input.Series;
+            Input.Parallel = parallel is { } p ? Numbers.ForInput(p) : Input.Parallel;
         }
 
         Design.SavedBy = SaverCookie.Read(Request);

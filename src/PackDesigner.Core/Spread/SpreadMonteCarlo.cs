@@ -338,8 +338,14 @@ public static class SpreadMonteCarlo
             "both" => string.Create(inv, $"{r.OverVoltageTripProbability * 100:0.###} % of packs trip OV at the top and {r.UnderVoltageTripProbability * 100:0.###} % trip UV at the bottom."),
             _ => string.Create(inv, $"no more than {risk * 100:0.###} % of packs trip at either end."),
         };
+        // Within half a watt-hour the two are the same as printed; never "-0 Wh below".
+        var cost = r.EnergyCostWh >= 0.5
+            ? string.Create(inv, $"{r.EnergyCostWh:0} Wh ({r.EnergyCostPercent:0.#} %) below")
+            : r.EnergyCostWh <= -0.5
+                ? string.Create(inv, $"{-r.EnergyCostWh:0} Wh above")
+                : "the same as";
         text += string.Create(inv,
-            $" Recommended CV {r.RecommendedConstantVoltage:0.00} V; median usable energy {r.RecommendedUsableEnergyWh:0} Wh, {r.EnergyCostWh:0} Wh ({r.EnergyCostPercent:0.#} %) below the nominal pack's {r.NominalUsableEnergyWh:0} Wh.");
+            $" Recommended CV {r.RecommendedConstantVoltage:0.00} V; median usable energy {r.RecommendedUsableEnergyWh:0} Wh, {cost} the nominal pack's {r.NominalUsableEnergyWh:0} Wh.");
         return new BalancingVerdict(r.Balancing, failsAt, r.OverVoltageTripProbability, r.UnderVoltageTripProbability, r.RecommendedConstantVoltage, r.RecommendedUsableEnergyWh, r.EnergyCostWh, text);
     }
 

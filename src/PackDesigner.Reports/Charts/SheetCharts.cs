@@ -18,7 +18,7 @@ public enum ChartImageFormat
 }
 
 /// <summary>
-/// The sheet's two charts as images, drawn with ScottPlot (the only file that uses it: its Color, Colors, Image
+/// The sheet's charts as images, drawn with ScottPlot (the only file that uses it: its Color, Colors, Image
 /// and Label types clash with other namespaces). Sizes are in layout pixels; <c>scale</c> multiplies the pixel
 /// count and every line and text size, so a print image is sharp at the same layout.
 /// </summary>
@@ -157,6 +157,68 @@ public static class SheetCharts
         plot.Axes.Right.IsVisible = false;
         plot.HideGrid();
         plot.YLabel(chart.YLabel, AxisLabelSize);
+        return Encode(plot, width, height, scale, format);
+    }
+
+    /// <summary>
+    /// The spread histogram: the count of packs in each bin of the highest cell voltage at the end of charge, with
+    /// the OV release and the OV trip as labelled vertical lines (the legend names them with their voltage).
+    /// </summary>
+    public static byte[] SpreadHistogram(SpreadHistogramModel chart, int width, int height, double scale, ChartImageFormat format = ChartImageFormat.Png)
+    {
+        ArgumentNullException.ThrowIfNull(chart);
+        EnsureFonts();
+        var plot = NewPlot(scale);
+
+        // A width of 0 means every trial gave the same value: draw that one bin 1 mV wide.
+        var binWidth = chart.BinWidth > 0 ? chart.BinWidth : 0.001;
+        var lines = chart.Lines.Where(l => double.IsFinite(l.Value)).ToList();
+        var dataHigh = chart.Low + binWidth * Math.Max(chart.Counts.Count, 1);
+        var low = Math.Min(chart.Low, lines.Count == 0 ? chart.Low : lines.Min(l => l.Value));
+        var high = Math.Max(dataHigh, lines.Count == 0 ? dataHigh : lines.Max(l => l.Value));
+        var pad = Math.Max((high - low) * 0.05, 0.002);
+
+        // A tight spread far from the OV lines gives bins far narrower than a pixel: merge neighbouring bins (summing
+        // their counts) until a bar is at least 1/200 of the axis wide, so the distribution stays visible where it is.
+        var merge = Math.Max(1, (int)Math.Ceiling((high - low + 2 * pad) / 200 / binWidth));
+        var counts = chart.Counts.Select((c, i) => (c, i)).GroupBy(x => x.i / merge, x => x.c).Select(g => g.Sum()).ToList();
+        var barWidth = binWidth * merge;
+
+        foreach (var line in lines)
+        {
+            var color = line.Key == "ov-trip" ? Datasheet : Bms;
+            var v = plot.Add.VerticalLine(line.Value, 1.6f, color, line.Key == "ov-trip" ? LinePattern.Solid : LinePattern.Dashed);
+            v.LegendText = line.Label;
+            v.LabelText = line.Label;
+            v.LabelFontName = FontName;
+            v.LabelFontSize = 8f;
+            v.LabelOppositeAxis = true;
+            v.EnableAutoscale = false;
+        }
+
+        // Bars after the lines, so a spread sitting on a line is drawn over it.
+        var bars = counts.Select((count, i) => new Bar
+        {
+            Position = chart.Low + (i + 0.5) * barWidth,
+            Value = count,
+            Size = barWidth,
+            FillColor = Curve.WithAlpha(0.85),
+            LineWidth = 0,
+        }).ToList();
+        var barPlot = plot.Add.Bars(bars);
+        barPlot.LegendText = "Packs per bin";
+
+        high = Math.Max(high, chart.Low + barWidth * Math.Max(counts.Count, 1));
+        var top = counts.Count == 0 ? 1 : Math.Max(counts.Max(), 1);
+        plot.Axes.SetLimits(low - pad, high + pad, 0, top * 1.1);
+        plot.XLabel(chart.XLabel, AxisLabelSize);
+        plot.YLabel(chart.YLabel, AxisLabelSize);
+        plot.ShowLegend(Edge.Bottom);
+        plot.Legend.Orientation = Orientation.Horizontal;
+        plot.Legend.FontSize = 8.5f;
+        plot.Legend.OutlineWidth = 0;
+        plot.Legend.ShadowColor = Colors.Transparent;
+        plot.Legend.FontName = FontName;
         return Encode(plot, width, height, scale, format);
     }
 

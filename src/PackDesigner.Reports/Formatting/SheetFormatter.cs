@@ -56,6 +56,12 @@ public static class SheetFormatter
     public static SheetValue Energy(double wattHours) =>
         Math.Abs(wattHours) < 1000 ? new(Fixed(wattHours, 0), "Wh") : new(Fixed(wattHours / 1000, 2), "kWh");
 
+    /// <summary>A probability given as a fraction, printed in % with 2 decimals.</summary>
+    public static SheetValue Probability(double fraction) => new(Fixed(fraction * 100, 2), "%");
+
+    /// <summary>A 95 % interval of a probability given as fractions: "0.05–0.20 %".</summary>
+    public static string ProbabilityInterval(double low, double high) => $"{Fixed(low * 100, 2)}–{Fixed(high * 100, 2)} %";
+
     /// <summary>Energy in J, three significant digits.</summary>
     public static SheetValue Joules(double joules) => new(Significant(joules, 3, 3), "J");
 

@@ -1,6 +1,7 @@
 using System.Globalization;
 using PackDesigner.Core.Design;
 using PackDesigner.Core.Evaluation;
+using PackDesigner.Core.Spread;
 using PackDesigner.Reports.Formatting;
 
 namespace PackDesigner.Reports.Model;
@@ -8,7 +9,7 @@ namespace PackDesigner.Reports.Model;
 /// <summary>
 /// Everything the design sheet prints, already formatted by <see cref="SheetFormatter"/>: the PDF, the HTML print
 /// view and the CSV/JSON exports all read their strings from here, so they print the same text. Built by
-/// <see cref="Create"/> from the revision's header, its input and its evaluation result.
+/// <see cref="Create(SheetHeader, DesignInput, EvaluationResult, SpreadResult?)"/> from the revision's header, its input and its evaluation result.
 /// </summary>
 public sealed class DesignSheetModel
 {
@@ -96,6 +97,9 @@ public sealed class DesignSheetModel
 
     public required IReadOnlyList<SignOffLine> SignOff { get; init; }
 
+    /// <summary>The cell-spread analysis; null when the sheet was built without one (then it prints no spread section).</summary>
+    public SheetSpread? Spread { get; init; }
+
     /// <summary>"Page 2 of 7".</summary>
     public static string PageLabel(int page, int pageCount) => SheetFormatter.PageLabel(page, pageCount);
 
@@ -104,13 +108,26 @@ public sealed class DesignSheetModel
     /// result's calculation version must be the header's.
     /// </summary>
     /// <exception cref="ArgumentException">A header field is missing or malformed, or the three do not belong together.</exception>
-    public static DesignSheetModel Create(SheetHeader header, DesignInput input, EvaluationResult result)
+    public static DesignSheetModel Create(SheetHeader header, DesignInput input, EvaluationResult result) =>
+        Create(header, input, result, null);
+
+    /// <summary>
+    /// Builds the model with the cell-spread analysis of the same input (<paramref name="spread"/>; null prints no
+    /// spread section).
+    /// </summary>
+    /// <exception cref="ArgumentException">As <see cref="Create(SheetHeader, DesignInput, EvaluationResult)"/>, or the spread describes another configuration.</exception>
+    public static DesignSheetModel Create(SheetHeader header, DesignInput input, EvaluationResult result, SpreadResult? spread)
     {
         ArgumentNullException.ThrowIfNull(header);
         ArgumentNullException.ThrowIfNull(input);
         ArgumentNullException.ThrowIfNull(result);
         Check(header, input, result);
-        return DesignSheetModelBuilder.Build(header, input, result);
+        if (spread is not null && (spread.Series != input.Series || spread.Parallel != input.Parallel))
+        {
+            throw new ArgumentException("The spread analysis describes a different configuration than the input.", nameof(spread));
+        }
+
+        return DesignSheetModelBuilder.Build(header, input, result, spread is null ? null : SheetSpreadBuilder.Build(spread));
     }
 
     private static void Check(SheetHeader header, DesignInput input, EvaluationResult result)

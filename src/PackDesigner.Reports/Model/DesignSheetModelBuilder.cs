@@ -15,7 +15,7 @@ internal static class DesignSheetModelBuilder
 {
     private static readonly CultureInfo Inv = CultureInfo.InvariantCulture;
 
-    public static DesignSheetModel Build(SheetHeader header, DesignInput input, EvaluationResult result)
+    public static DesignSheetModel Build(SheetHeader header, DesignInput input, EvaluationResult result, SheetSpread? spread = null)
     {
         var approved = header.SignOff?.ApprovedBy;
         var date = F.DateTimeUtc(header.CreatedAtUtc);
@@ -57,6 +57,7 @@ internal static class DesignSheetModelBuilder
             BuildNotes = SheetTexts.BuildNotes(input, result),
             Cautions = SheetTexts.Cautions(result),
             SignOff = SignOff(header.SignOff),
+            Spread = spread,
         };
     }
 
@@ -267,7 +268,7 @@ internal static class DesignSheetModelBuilder
         return rows;
     }
 
-    private static string LimitedBy(string key) => key switch
+    internal static string LimitedBy(string key) => key switch
     {
         ChargeSetpointCalculator.LimitedByWindowTop => "the window's top at rest",
         ChargeSetpointCalculator.LimitedByOverVoltageRelease => "the smallest group reaching the OV release",

@@ -58,3 +58,32 @@ public sealed record LadderRung(string Key, string Label, double PerCellVoltage,
 
 /// <summary>The protection ladder drawn to scale per cell, highest layer first.</summary>
 public sealed record LadderChartModel(string Title, string Caption, string YLabel, IReadOnlyList<LadderRung> Rungs);
+
+/// <summary>One figure of the spread analysis at four percentiles, as printed.</summary>
+public sealed record SpreadPercentileRow(string Key, string Label, SheetValue P5, SheetValue P50, SheetValue P95, SheetValue P999);
+
+/// <summary>
+/// Counts of the highest cell voltage at the end of charge in equal bins from <see cref="Low"/> (V per cell), each
+/// <see cref="BinWidth"/> wide, with the OV release and OV trip as labelled vertical lines.
+/// </summary>
+public sealed record SpreadHistogramModel(
+    string Title,
+    string Caption,
+    string XLabel,
+    string YLabel,
+    double Low,
+    double BinWidth,
+    IReadOnlyList<long> Counts,
+    IReadOnlyList<ChartLine> Lines);
+
+/// <summary>
+/// The cell-spread analysis as printed: how it was run, the trip probabilities with their 95 % intervals, the
+/// recommended charge voltage and its energy cost, the percentiles and the histogram (null when not kept).
+/// </summary>
+public sealed record SheetSpread(
+    string Title,
+    string RunLine,
+    IReadOnlyList<SettingRow> Probabilities,
+    IReadOnlyList<SettingRow> Recommendation,
+    IReadOnlyList<SpreadPercentileRow> Percentiles,
+    SpreadHistogramModel? Histogram);

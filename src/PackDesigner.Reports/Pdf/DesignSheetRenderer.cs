@@ -22,6 +22,7 @@ public static class DesignSheetRenderer
         new ChargerSection(),
         new ProtectionSection(),
         new ChartsSection(),
+        new SpreadSection(),
         new FindingsSection(),
         new BuildNotesSection(),
         new CautionsSection(),
@@ -54,6 +55,11 @@ public static class DesignSheetRenderer
         {
             foreach (var section in sections)
             {
+                if (!section.Prints(model))
+                {
+                    continue;
+                }
+
                 layout.SectionHeading(section.Title);
                 section.Render(model, layout);
             }

@@ -12,5 +12,8 @@ public interface ISheetSection
     /// <summary>The heading, without its number.</summary>
     string Title { get; }
 
+    /// <summary>Whether the section prints for this model; when false the renderer prints neither its heading nor its body (nor counts its number).</summary>
+    bool Prints(DesignSheetModel model) => true;
+
     void Render(DesignSheetModel model, SheetLayout layout);
 }

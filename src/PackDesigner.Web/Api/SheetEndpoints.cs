@@ -30,6 +30,8 @@ public static class SheetEndpoints
             SendAsync(c, id, n, s, ct, m => Results.Bytes(SheetChartImages.Ocv(m), "image/png")));
         revision.MapGet(SheetRoutes.LadderChartPath, (HttpContext c, int id, int n, RevisionSheetService s, CancellationToken ct) =>
             SendAsync(c, id, n, s, ct, m => Results.Bytes(SheetChartImages.Ladder(m), "image/png")));
+        revision.MapGet(SheetRoutes.SpreadChartPath, (HttpContext c, int id, int n, RevisionSheetService s, CancellationToken ct) =>
+            SendAsync(c, id, n, s, ct, m => SheetChartImages.Spread(m) is { } png ? Results.Bytes(png, "image/png") : Results.StatusCode(StatusCodes.Status404NotFound)));
         return app;
     }
 

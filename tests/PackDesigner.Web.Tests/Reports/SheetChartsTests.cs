@@ -53,4 +53,30 @@ public sealed class SheetChartsTests
         Assert.Equal(0xD8, a[1]);
         Assert.Equal(a, b);
     }
+
+    [Fact]
+    public void SpreadHistogram_Jpeg_IsAJpegAndRepeatable()
+    {
+        var chart = new PackDesigner.Reports.Model.SpreadHistogramModel("Title", "Caption", "V", "Packs", 3.3410, 0.00001,
+            [.. Enumerable.Range(0, 40).Select(i => (long)(i * (40 - i)))],
+            [new("ov-release", "OV release 3.500 V", 3.5), new("ov-trip", "OV trip 3.600 V", 3.6)]);
+        var a = SheetCharts.SpreadHistogram(chart, 400, 200, 1.5, ChartImageFormat.Jpeg);
+        var b = SheetCharts.SpreadHistogram(chart, 400, 200, 1.5, ChartImageFormat.Jpeg);
+        // JPEG SOI marker FF D8 (ITU-T T.81, B.1.1.3).
+        Assert.Equal(0xFF, a[0]);
+        Assert.Equal(0xD8, a[1]);
+        Assert.Equal(a, b);
+    }
+
+    [Fact]
+    public void SpreadHistogram_AllTrialsEqual_PngOfTheScaledSize()
+    {
+        var chart = new PackDesigner.Reports.Model.SpreadHistogramModel("Title", "Caption", "V", "Packs", 3.45, 0, [10000],
+            [new("ov-release", "OV release 3.500 V", 3.5), new("ov-trip", "OV trip 3.600 V", 3.6)]);
+        var png = SheetCharts.SpreadHistogram(chart, 300, 150, 2);
+        // PNG signature and IHDR width/height (ISO/IEC 15948, 5.2 and 11.2.2).
+        Assert.Equal(new byte[] { 0x89, 0x50, 0x4E, 0x47, 0x0D, 0x0A, 0x1A, 0x0A }, png[..8]);
+        Assert.Equal(600, (png[16] << 24) | (png[17] << 16) | (png[18] << 8) | png[19]);
+        Assert.Equal(300, (png[20] << 24) | (png[21] << 16) | (png[22] << 8) | png[23]);
+    }
 }

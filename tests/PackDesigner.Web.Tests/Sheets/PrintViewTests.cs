@@ -68,6 +68,23 @@ public sealed class PrintViewTests(SheetAppFactory factory) : IClassFixture<Shee
     }
 
     [Fact]
+    public async Task Get_SavedRevision_SpreadSectionWithTheModelsStringsAndLaterSectionsRenumbered()
+    {
+        var (id, model) = await CreateAsync();
+
+        var page = await PrintViewPage.OpenAsync(_client, SheetRoutes.Sheet(id, 1));
+
+        var spread = model.Spread!;
+        Assert.Equal("7 Cell spread", PrintViewPage.Text(page.ByTestId("section-spread")!, "h2"));
+        Assert.Equal(spread.RunLine, page.ByTestId("spread-run")!.TextContent.Trim());
+        AssertSettingRows(page, "spread-probability-row", spread.Probabilities);
+        AssertSettingRows(page, "spread-recommendation-row", spread.Recommendation);
+        Assert.Equal(spread.Percentiles.Select(p => p.Key), page.AllByTestId("spread-percentile-row").Select(r => r.GetAttribute("data-key")));
+        Assert.Equal("8 Findings", PrintViewPage.Text(page.ByTestId("section-findings")!, "h2"));
+        Assert.Equal("11 Sign-off", PrintViewPage.Text(page.ByTestId("section-sign-off")!, "h2"));
+    }
+
+    [Fact]
     public async Task Get_DraftRevision_EveryCautionAndTheDraftMarking()
     {
         var (id, model) = await CreateAsync();
@@ -118,7 +135,10 @@ public sealed class PrintViewTests(SheetAppFactory factory) : IClassFixture<Shee
         Assert.All(model.OcvChart.Lines, l => Assert.Contains(l.Label, ocv.AlternativeText, StringComparison.Ordinal));
         Assert.StartsWith(model.LadderChart.Title, ladder.AlternativeText, StringComparison.Ordinal);
         Assert.All(model.LadderChart.Rungs, r => Assert.Contains($"{r.Label} {r.PerCell.Text} per cell", ladder.AlternativeText, StringComparison.Ordinal));
-        foreach (var img in new[] { ocv, ladder })
+        var spread = (IHtmlImageElement)page.ByTestId("chart-spread")!.QuerySelector("img")!;
+        Assert.Equal(SheetRoutes.SpreadChart(id, 1), spread.GetAttribute("src"));
+        Assert.StartsWith(model.Spread!.Histogram!.Title, spread.AlternativeText, StringComparison.Ordinal);
+        foreach (var img in new[] { ocv, ladder, spread })
         {
             using var image = await _client.GetAsync(img.GetAttribute("src"));
             Assert.Equal("image/png", image.Content.Headers.ContentType?.MediaType);

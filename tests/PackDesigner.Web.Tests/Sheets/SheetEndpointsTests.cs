@@ -3,6 +3,7 @@ using System.Text.Json;
 using Microsoft.AspNetCore.Mvc.Testing;
 using Microsoft.Extensions.Logging;
 using PackDesigner.Core.Evaluation;
+using PackDesigner.Core.Spread;
 using PackDesigner.Reports.Export;
 using PackDesigner.Web.Pages.Sheets;
 using PackDesigner.Web.Tests.Reports;
@@ -20,8 +21,36 @@ public sealed class SheetEndpointsTests(SheetAppFactory factory) : IClassFixture
 
     public static TheoryData<string> FileRoutes => new()
     {
-        SheetRoutes.PdfPath, SheetRoutes.CsvPath, SheetRoutes.JsonPath, SheetRoutes.OcvChartPath, SheetRoutes.LadderChartPath,
+        SheetRoutes.PdfPath, SheetRoutes.CsvPath, SheetRoutes.JsonPath, SheetRoutes.OcvChartPath, SheetRoutes.LadderChartPath, SheetRoutes.SpreadChartPath,
     };
+
+    [Fact]
+    public async Task GetPdf_SavedRevision_SpreadSectionWithTheRecommendedCv()
+    {
+        var design = await factory.CreateDesignAsync(SheetDesigns.Name, SheetDesigns.Standard);
+
+        var text = PdfText.Read(await _client.GetByteArrayAsync(SheetRoutes.Pdf(design.Id, 1)));
+
+        // The stored input analysed with the default (deterministic) settings, independently of the app.
+        var spread = SpreadMonteCarlo.Analyze(new SpreadRequest { Design = SheetDesigns.Standard, Spread = new SpreadSettings() }).Result!;
+        Assert.Contains("7 Cell spread", text.AllLines);
+        Assert.Contains($"Recommended CV, pack {F.PackVoltage(spread.RecommendedConstantVoltage).Text}", text.Flat, StringComparison.Ordinal);
+        Assert.Contains($"Recommended CV per cell {F.CellVoltage(spread.RecommendedConstantVoltagePerCell).Text}", text.AllLines);
+    }
+
+    [Fact]
+    public async Task GetSpreadChart_SavedRevision_Png()
+    {
+        var design = await factory.CreateDesignAsync(SheetDesigns.Name, SheetDesigns.Standard);
+
+        using var response = await _client.GetAsync(SheetRoutes.SpreadChart(design.Id, 1));
+
+        Assert.Equal(HttpStatusCode.OK, response.StatusCode);
+        Assert.Equal("image/png", response.Content.Headers.ContentType?.MediaType);
+        var bytes = await response.Content.ReadAsByteArrayAsync();
+        // PNG signature (ISO/IEC 15948, 5.2).
+        Assert.Equal(new byte[] { 0x89, 0x50, 0x4E, 0x47, 0x0D, 0x0A, 0x1A, 0x0A }, bytes[..8]);
+    }
 
     [Fact]
     public async Task GetPdf_SavedRevision_InlinePdfWithTheHashAndTheModelsBmsValues()
@@ -48,7 +77,8 @@ public sealed class SheetEndpointsTests(SheetAppFactory factory) : IClassFixture
         // The model's figures are Core's, formatted once: the over-voltage trip per cell as an independent check.
         var core = DesignEvaluator.Evaluate(SheetDesigns.Standard).Result!;
         Assert.Equal(F.CellVoltage(core.CellThresholds.OverVoltageTrip).Text, model.BmsSettings.Single(s => s.Key == "ov-trip").PerCell.Text);
-        Assert.Equal(2, text.ImagesPerPage.Sum());
+        // The OCV chart, the ladder and the spread histogram.
+        Assert.Equal(3, text.ImagesPerPage.Sum());
         Assert.All(model.Cautions, c => Assert.Contains(c.Title, text.AllLines));
     }
 

@@ -1,5 +1,6 @@
 using System.Globalization;
 using PackDesigner.Core.Evaluation;
+using PackDesigner.Core.Spread;
 using PackDesigner.Data.Designs;
 using PackDesigner.Data.Entities;
 using PackDesigner.Data.Json;
@@ -41,7 +42,8 @@ public sealed class SheetIntegrityException(string message) : Exception(message)
 /// Builds the design sheet of a saved revision. The stored input is evaluated again with Core's
 /// <see cref="DesignEvaluator"/> (pure and deterministic), so the sheet is printed from the same numbers that were
 /// saved, and the result is checked against the stored result JSON (serialized as the data layer stored it). The
-/// sheet's time is the revision's, so one revision always prints the same sheet. A database that cannot be
+/// sheet's time is the revision's, so one revision always prints the same sheet; the cell-spread analysis is run on
+/// the stored input with the default (deterministic) settings. A database that cannot be
 /// reached surfaces as the data layer's <c>StorageUnavailableException</c> (503 at the edges).
 /// </summary>
 public sealed class RevisionSheetService(DesignStore store)
@@ -77,7 +79,7 @@ public sealed class RevisionSheetService(DesignStore store)
         var result = Reproduce(revision);
         var header = new SheetHeader(d.Name, d.CustomerName, d.JobTitle, revision.Number, revision.CreatedUtc,
             revision.CalculationVersion, revision.InputSha256, StatusName(revision.Status), SignOff(revision));
-        return RevisionSheetResult.Ready(DesignSheetModel.Create(header, revision.Input, result));
+        return RevisionSheetResult.Ready(DesignSheetModel.Create(header, revision.Input, result, Spread(revision, ct)));
     }
 
     /// <summary>The message shown instead of a sheet computed with other rules.</summary>
@@ -139,6 +141,17 @@ public sealed class RevisionSheetService(DesignStore store)
         }
 
         return result;
+    }
+
+    /// <summary>
+    /// The cell-spread analysis of the stored input with the default settings (fixed trials and seed, σ from the
+    /// datasheet tolerance), so one revision always prints the same figures.
+    /// </summary>
+    private static SpreadResult Spread(RevisionDetails revision, CancellationToken ct)
+    {
+        var outcome = SpreadMonteCarlo.Analyze(new SpreadRequest { Design = revision.Input, Spread = new SpreadSettings() }, ct);
+        return outcome.Result ?? throw new SheetIntegrityException(Text(
+            $"Revision {revision.Number} of design {revision.DesignId}: the stored input evaluates but its spread analysis does not ({string.Join("; ", outcome.Errors.Select(e => e.Field + ": " + e.Message))})."));
     }
 
     private static string Text(FormattableString s) => s.ToString(CultureInfo.InvariantCulture);

@@ -17,6 +17,7 @@ public static class SheetRoutes
     public const string JsonPath = "/settings.json";
     public const string OcvChartPath = "/charts/ocv.png";
     public const string LadderChartPath = "/charts/ladder.png";
+    public const string SpreadChartPath = "/charts/spread.png";
 
     /// <summary>The design's own page (built by the design pages).</summary>
     public static string Design(int id) => FormattableString.Invariant($"/designs/{id}");
@@ -36,6 +37,8 @@ public static class SheetRoutes
     public static string OcvChart(int id, int n) => Revision(id, n) + OcvChartPath;
 
     public static string LadderChart(int id, int n) => Revision(id, n) + LadderChartPath;
+
+    public static string SpreadChart(int id, int n) => Revision(id, n) + SpreadChartPath;
 
     /// <summary>File name of the PDF: <c>design-12-rev-3.pdf</c>.</summary>
     public static string PdfFileName(int id, int n) => FormattableString.Invariant($"design-{id}-rev-{n}.pdf");
